@@ -1,0 +1,42 @@
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { AppDeps } from './deps.ts';
+import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
+import { healthRouter } from './routes/health.ts';
+import { studiosRouter } from './routes/studios.ts';
+import { serveApps } from './static-apps.ts';
+
+/** Every API router, in one list so the access-matrix test can enumerate the real routes. */
+export const apiRouters = [healthRouter, studiosRouter];
+
+export function createApp(deps: AppDeps): Express {
+  const { config, logger } = deps;
+  const secure = config.PUBLIC_ORIGIN.startsWith('https:');
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  app.use(
+    helmet({
+      hsts: secure,
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'img-src': ["'self'", 'data:', 'blob:', new URL(config.S3_ENDPOINT).origin],
+          'connect-src': ["'self'"],
+          'font-src': ["'self'"],
+          // Swatches set their color through the style attribute.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'upgrade-insecure-requests': secure ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use('/api', express.json({ limit: `${config.JSON_BODY_LIMIT_KB}kb` }));
+  for (const router of apiRouters) app.use('/api', router(deps));
+  app.use('/api', apiNotFound);
+  if (config.APPS_DIR) serveApps(app, config.APPS_DIR);
+  app.use(errorMiddleware);
+  return app;
+}

@@ -1,0 +1,49 @@
+import { createServer, type Server as HttpServer } from 'node:http';
+import { connectDatabase } from '@vatside/db/client';
+import { createApp } from './app.ts';
+import type { Config } from './config.ts';
+import type { AppDeps } from './deps.ts';
+import { createLogger } from './logger.ts';
+import { createMailer } from './mail/mailer.ts';
+import { createRealtime, type RealtimeServer } from './realtime/socket-server.ts';
+import { createObjectStore } from './storage/object-store.ts';
+
+export interface RunningServer {
+  deps: AppDeps;
+  httpServer: HttpServer;
+  io: RealtimeServer;
+  url: string;
+  close(): Promise<void>;
+}
+
+/** Builds the whole server from real services and starts listening. */
+export async function startServer(config: Config): Promise<RunningServer> {
+  const logger = createLogger(config);
+  const deps: AppDeps = {
+    config,
+    logger,
+    database: connectDatabase(config.DATABASE_URL),
+    objectStore: createObjectStore(config),
+    mailer: createMailer(config),
+  };
+  const httpServer = createServer(createApp(deps));
+  const io = createRealtime(httpServer, deps);
+  await new Promise<void>((resolve, reject) => {
+    httpServer.once('error', reject);
+    httpServer.listen(config.PORT, config.HOST, resolve);
+  });
+  const address = httpServer.address();
+  const port = typeof address === 'object' && address ? address.port : config.PORT;
+  return {
+    deps,
+    httpServer,
+    io,
+    url: `http://${config.HOST}:${port}`,
+    async close() {
+      await io.close(); // also closes the HTTP server
+      deps.objectStore.close();
+      deps.mailer.close();
+      await deps.database.close();
+    },
+  };
+}

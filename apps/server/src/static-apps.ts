@@ -1,0 +1,32 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+
+/**
+ * Serves the built apps from one origin: the console under /console/, the viewer at /.
+ * Hashed assets are cached for a year; the HTML shells are never cached.
+ */
+export function serveApps(app: Express, appsDir: string): void {
+  const mounts = [
+    { prefix: '/console', dist: path.join(appsDir, 'console', 'dist') },
+    { prefix: '/', dist: path.join(appsDir, 'viewer', 'dist') },
+  ];
+  for (const { prefix, dist } of mounts) {
+    if (!existsSync(path.join(dist, 'index.html'))) continue;
+    app.use(
+      prefix,
+      express.static(dist, {
+        index: false,
+        setHeaders(res, file) {
+          res.setHeader('Cache-Control', file.includes(`${path.sep}assets${path.sep}`) ? 'public, max-age=31536000, immutable' : 'no-cache');
+        },
+      }),
+    );
+    const shell = path.join(dist, 'index.html');
+    const pattern = prefix === '/' ? '/{*rest}' : `${prefix}{/*rest}`;
+    app.get(pattern, (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(shell);
+    });
+  }
+}
