@@ -1,14 +1,21 @@
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
+import { toNodeHandler } from 'better-auth/node';
+import { attachSession } from './auth/authorize.ts';
 import type { AppDeps } from './deps.ts';
 import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
+import { accountRouter } from './routes/account.ts';
 import { healthRouter } from './routes/health.ts';
+import { membersRouter } from './routes/members.ts';
 import { studiosRouter } from './routes/studios.ts';
 import { serveApps } from './static-apps.ts';
 
 /** Every API router, in one list so the access-matrix test can enumerate the real routes. */
-export const apiRouters = [healthRouter, studiosRouter];
+export const apiRouters = [healthRouter, accountRouter, studiosRouter, membersRouter];
+
+/** better-auth answers everything under this path itself (sign-up, sign-in, verify, reset, delete). */
+export const authBasePath = '/api/auth';
 
 export function createApp(deps: AppDeps): Express {
   const { config, logger } = deps;
@@ -33,7 +40,13 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   );
-  app.use('/api', express.json({ limit: `${config.JSON_BODY_LIMIT_KB}kb` }));
+  // better-auth reads its own request bodies, so it goes before the JSON parser.
+  app.all(`${authBasePath}/{*rest}`, toNodeHandler(deps.auth));
+  app.use(
+    '/api',
+    express.json({ limit: `${config.JSON_BODY_LIMIT_KB}kb` }),
+    attachSession(deps.auth),
+  );
   for (const router of apiRouters) app.use('/api', router(deps));
   app.use('/api', apiNotFound);
   if (config.APPS_DIR) serveApps(app, config.APPS_DIR);

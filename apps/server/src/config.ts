@@ -22,6 +22,13 @@ const configSchema = z.object({
   MAIL_FROM: z.string().default('Vatside <no-reply@vatside.invalid>'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   JSON_BODY_LIMIT_KB: z.coerce.number().int().positive().default(100),
+  /** Signs session cookies and tokens; a real deployment must set its own. */
+  BETTER_AUTH_SECRET: z
+    .string()
+    .min(32)
+    .default('local-only-secret-change-me-for-any-real-deployment'),
+  /** Attempts per minute per client address on sign-in, sign-up and password reset. */
+  AUTH_ATTEMPTS_PER_MINUTE: z.coerce.number().int().positive().default(10),
   /** Folder with the built apps (apps/<name>/dist); empty serves the API alone. */
   APPS_DIR: z.string().default(''),
 });
@@ -33,6 +40,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   if (!parsed.success) {
     const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
     throw new Error(`Invalid configuration:\n  ${problems.join('\n  ')}`);
+  }
+  if (
+    parsed.data.NODE_ENV === 'production' &&
+    parsed.data.BETTER_AUTH_SECRET.startsWith('local-only')
+  ) {
+    throw new Error('Invalid configuration:\n  BETTER_AUTH_SECRET must be set in production');
   }
   return parsed.data;
 }

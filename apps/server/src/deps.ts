@@ -1,3 +1,4 @@
+import type { Auth } from './auth/auth.ts';
 import type { DatabaseHandle } from '@vatside/db/client';
 import type { Config } from './config.ts';
 import type { Logger } from './logger.ts';
@@ -11,4 +12,5 @@ export interface AppDeps {
   database: DatabaseHandle;
   objectStore: ObjectStore;
   mailer: Mailer;
+  auth: Auth;
 }

@@ -10,7 +10,10 @@ const server = await startServer(config).catch((error: NodeJS.ErrnoException) =>
   }
   process.exit(1);
 });
-server.deps.logger.info({ url: server.url, origin: config.PUBLIC_ORIGIN }, 'Vatside server listening');
+server.deps.logger.info(
+  { url: server.url, origin: config.PUBLIC_ORIGIN },
+  'Vatside server listening',
+);
 
 let stopping = false;
 async function shutdown(signal: string) {

@@ -1,6 +1,7 @@
 import { createServer, type Server as HttpServer } from 'node:http';
 import { connectDatabase } from '@vatside/db/client';
 import { createApp } from './app.ts';
+import { createAuth } from './auth/auth.ts';
 import type { Config } from './config.ts';
 import type { AppDeps } from './deps.ts';
 import { createLogger } from './logger.ts';
@@ -19,12 +20,15 @@ export interface RunningServer {
 /** Builds the whole server from real services and starts listening. */
 export async function startServer(config: Config): Promise<RunningServer> {
   const logger = createLogger(config);
+  const database = connectDatabase(config.DATABASE_URL);
+  const mailer = createMailer(config);
   const deps: AppDeps = {
     config,
     logger,
-    database: connectDatabase(config.DATABASE_URL),
+    database,
     objectStore: createObjectStore(config),
-    mailer: createMailer(config),
+    mailer,
+    auth: createAuth(config, database.db, mailer),
   };
   const httpServer = createServer(createApp(deps));
   const io = createRealtime(httpServer, deps);

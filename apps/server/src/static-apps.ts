@@ -18,7 +18,12 @@ export function serveApps(app: Express, appsDir: string): void {
       express.static(dist, {
         index: false,
         setHeaders(res, file) {
-          res.setHeader('Cache-Control', file.includes(`${path.sep}assets${path.sep}`) ? 'public, max-age=31536000, immutable' : 'no-cache');
+          res.setHeader(
+            'Cache-Control',
+            file.includes(`${path.sep}assets${path.sep}`)
+              ? 'public, max-age=31536000, immutable'
+              : 'no-cache',
+          );
         },
       }),
     );

@@ -20,6 +20,7 @@ export const errorCodes = [
   'CONFLICT',
   'RATE_LIMITED',
   'UNSUPPORTED_MEDIA_TYPE',
+  'MAIL_UNAVAILABLE',
   'INTERNAL',
 ] as const;
 export type ErrorCode = (typeof errorCodes)[number];

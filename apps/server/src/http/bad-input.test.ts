@@ -1,4 +1,4 @@
-import { count } from 'drizzle-orm';
+import { count } from '@vatside/db/sql';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { errorBodySchema } from '@vatside/contracts/errors';
 import { studios } from '@vatside/db/schema';
@@ -7,7 +7,8 @@ import { startTestServer } from '../test-support/test-server.ts';
 
 describe('bad input gets the one error shape and writes nothing', () => {
   let server: RunningServer;
-  const studioCount = async () => (await server.deps.database.db.select({ n: count() }).from(studios))[0]?.n;
+  const studioCount = async () =>
+    (await server.deps.database.db.select({ n: count() }).from(studios))[0]?.n;
 
   beforeAll(async () => {
     server = await startTestServer({ JSON_BODY_LIMIT_KB: '4' });
@@ -46,7 +47,11 @@ describe('bad input gets the one error shape and writes nothing', () => {
   });
 
   it('invalid query fields → 400 VALIDATION_FAILED naming the field', async () => {
-    const body = await expectError(await fetch(`${server.url}/api/studios?limit=lots`), 400, 'VALIDATION_FAILED');
+    const body = await expectError(
+      await fetch(`${server.url}/api/studios?limit=lots`),
+      400,
+      'VALIDATION_FAILED',
+    );
     expect(Object.keys(body.error.fields ?? {})).toEqual(['limit']);
   });
 

@@ -15,12 +15,22 @@ interface BodyParserError {
 function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;
   const type = (err as BodyParserError | null)?.type;
-  if (type === 'entity.parse.failed') return new HttpError(400, 'BAD_JSON', 'The request body is not valid JSON.');
-  if (type === 'entity.too.large') return new HttpError(413, 'PAYLOAD_TOO_LARGE', 'The request body is too large.');
+  if (type === 'entity.parse.failed')
+    return new HttpError(400, 'BAD_JSON', 'The request body is not valid JSON.');
+  if (type === 'entity.too.large')
+    return new HttpError(413, 'PAYLOAD_TOO_LARGE', 'The request body is too large.');
   if (type === 'charset.unsupported' || type === 'encoding.unsupported') {
-    return new HttpError(415, 'UNSUPPORTED_MEDIA_TYPE', 'The request body encoding is not supported.');
+    return new HttpError(
+      415,
+      'UNSUPPORTED_MEDIA_TYPE',
+      'The request body encoding is not supported.',
+    );
   }
-  return new HttpError(500, 'INTERNAL', 'Something went wrong on our side. Nothing was saved; please try again.');
+  return new HttpError(
+    500,
+    'INTERNAL',
+    'Something went wrong on our side. Nothing was saved; please try again.',
+  );
 }
 
 export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {

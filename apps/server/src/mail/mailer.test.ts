@@ -9,7 +9,11 @@ describe('mailer over real SMTP to the mail catcher', () => {
 
   it('delivers a message that can be read back from the inbox API', async () => {
     const to = uniqueRecipient('mailer');
-    await mailer.send({ to, subject: 'Prep list for Saturday', text: 'Soak the skein for 30 minutes.' });
+    await mailer.send({
+      to,
+      subject: 'Prep list for Saturday',
+      text: 'Soak the skein for 30 minutes.',
+    });
     const mail = await waitForMail(to);
     expect(mail.subject).toBe('Prep list for Saturday');
     expect(mail.text).toContain('Soak the skein for 30 minutes.');

@@ -2,7 +2,10 @@ import nodemailer from 'nodemailer';
 import type Mail from 'nodemailer/lib/mailer';
 import type { Config } from '../config.ts';
 
-export type OutgoingMail = Pick<Mail.Options, 'to' | 'subject' | 'text' | 'html' | 'headers' | 'attachments' | 'icalEvent'>;
+export type OutgoingMail = Pick<
+  Mail.Options,
+  'to' | 'subject' | 'text' | 'html' | 'headers' | 'attachments' | 'icalEvent'
+>;
 
 export interface Mailer {
   send(mail: OutgoingMail): Promise<{ messageId: string }>;

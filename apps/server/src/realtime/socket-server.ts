@@ -10,7 +10,9 @@ import type { AppDeps } from '../deps.ts';
 export type RealtimeServer = Server<ClientToServerEvents, ServerToClientEvents>;
 
 /** Every client event name, so the access-matrix test can enumerate them. */
-export const clientEventNames = ['clock:ping'] as const satisfies readonly (keyof ClientToServerEvents)[];
+export const clientEventNames = [
+  'clock:ping',
+] as const satisfies readonly (keyof ClientToServerEvents)[];
 
 export function createRealtime(httpServer: HttpServer, { config }: AppDeps): RealtimeServer {
   const io: RealtimeServer = new Server(httpServer, {

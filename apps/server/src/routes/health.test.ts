@@ -25,7 +25,10 @@ describe('GET /api/health when services are down', () => {
   let server: RunningServer;
   beforeAll(async () => {
     // Port 9 (discard) is closed on loopback here, so both probes must fail.
-    server = await startTestServer({ S3_ENDPOINT: 'http://127.0.0.1:9', SMTP_URL: 'smtp://127.0.0.1:9' });
+    server = await startTestServer({
+      S3_ENDPOINT: 'http://127.0.0.1:9',
+      SMTP_URL: 'smtp://127.0.0.1:9',
+    });
   });
   afterAll(() => server.close());
 

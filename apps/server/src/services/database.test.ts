@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { eq } from 'drizzle-orm';
+import { eq } from '@vatside/db/sql';
 import { afterAll, describe, expect, it } from 'vitest';
 import { connectDatabase } from '@vatside/db/client';
 import { studios } from '@vatside/db/schema';
@@ -18,7 +18,12 @@ describe('PostgreSQL through Drizzle', () => {
     expect(created?.id).toMatch(/^[0-9a-f-]{36}$/);
 
     const [read] = await handle.db.select().from(studios).where(eq(studios.slug, slug));
-    expect(read).toMatchObject({ slug, name: 'Round Trip Studio', accentHex: '#336699', tagline: '' });
+    expect(read).toMatchObject({
+      slug,
+      name: 'Round Trip Studio',
+      accentHex: '#336699',
+      tagline: '',
+    });
 
     await handle.db.delete(studios).where(eq(studios.slug, slug));
     expect(await handle.db.select().from(studios).where(eq(studios.slug, slug))).toHaveLength(0);

@@ -1,4 +1,4 @@
-import { sql } from 'drizzle-orm';
+import { sql } from '@vatside/db/sql';
 import type { Health, ServiceCheck } from '@vatside/contracts/health';
 import type { AppDeps } from '../deps.ts';
 
@@ -22,5 +22,9 @@ export async function checkHealth({ database, objectStore, mailer }: AppDeps): P
     timed(() => mailer.ping()),
   ]);
   const ok = db.ok && store.ok && mail.ok;
-  return { status: ok ? 'ok' : 'degraded', version, checks: { database: db, objectStore: store, mail } };
+  return {
+    status: ok ? 'ok' : 'degraded',
+    version,
+    checks: { database: db, objectStore: store, mail },
+  };
 }

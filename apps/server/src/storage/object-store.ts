@@ -35,7 +35,9 @@ export function createObjectStore(config: Config): ObjectStore {
 
   return {
     async put(key, body, contentType) {
-      await client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType }));
+      await client.send(
+        new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType }),
+      );
     },
     async getBytes(key) {
       const out = await client.send(new GetObjectCommand({ Bucket, Key: key }));
@@ -46,10 +48,14 @@ export function createObjectStore(config: Config): ObjectStore {
       await client.send(new DeleteObjectCommand({ Bucket, Key: key }));
     },
     signedGetUrl(key, expiresInS = 300) {
-      return getSignedUrl(client, new GetObjectCommand({ Bucket, Key: key }), { expiresIn: expiresInS });
+      return getSignedUrl(client, new GetObjectCommand({ Bucket, Key: key }), {
+        expiresIn: expiresInS,
+      });
     },
     async ping() {
-      await client.send(new HeadBucketCommand({ Bucket }), { abortSignal: AbortSignal.timeout(3000) });
+      await client.send(new HeadBucketCommand({ Bucket }), {
+        abortSignal: AbortSignal.timeout(3000),
+      });
     },
     close() {
       client.destroy();

@@ -2,11 +2,20 @@ import { loadConfig, type Config } from '../config.ts';
 import { startServer, type RunningServer } from '../server.ts';
 
 /** A real server on a free port, wired to the test profile's real services. */
-export function startTestServer(overrides: Partial<Record<keyof Config, string>> = {}): Promise<RunningServer> {
+export function startTestServer(
+  overrides: Partial<Record<keyof Config, string>> = {},
+): Promise<RunningServer> {
   if (!process.env.DATABASE_URL?.includes('vatside_test')) {
     throw new Error('Integration tests run through `npm test`, which starts the test services.');
   }
   return startServer(
-    loadConfig({ ...process.env, NODE_ENV: 'test', PORT: '0', LOG_LEVEL: 'silent', APPS_DIR: '', ...overrides }),
+    loadConfig({
+      ...process.env,
+      NODE_ENV: 'test',
+      PORT: '0',
+      LOG_LEVEL: 'silent',
+      APPS_DIR: '',
+      ...overrides,
+    }),
   );
 }

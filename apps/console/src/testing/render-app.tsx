@@ -1,0 +1,19 @@
+import { QueryClient } from '@tanstack/react-query';
+import { render } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { createMemoryRouter, RouterProvider } from 'react-router-dom';
+import { AppProviders } from '../app/providers.tsx';
+import { routes } from '../app/routes.tsx';
+
+/** Renders the real route tree at `path`, with a fresh cache and no automatic retries. */
+export function renderApp(path = '/') {
+  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  const router = createMemoryRouter(routes, { initialEntries: [path] });
+  const user = userEvent.setup();
+  render(
+    <AppProviders queryClient={queryClient}>
+      <RouterProvider router={router} />
+    </AppProviders>,
+  );
+  return { user, router };
+}

@@ -1,0 +1,19 @@
+import type { StudioStanding } from '@vatside/contracts/roles';
+
+/**
+ * Who may do what in a studio: the one table every route and socket event checks against.
+ * The apps only hide what a role cannot use; this is the rule.
+ */
+export const studioPolicy = {
+  'studio:read': ['visitor', 'viewer', 'moderator', 'host'],
+  'studio:follow': ['visitor', 'viewer', 'moderator', 'host'],
+  'members:read': ['moderator', 'host'],
+  'members:manage': ['host'],
+  'invitations:manage': ['host'],
+} as const satisfies Record<string, readonly StudioStanding[]>;
+
+export type StudioAction = keyof typeof studioPolicy;
+
+export function can(standing: StudioStanding, action: StudioAction): boolean {
+  return (studioPolicy[action] as readonly StudioStanding[]).includes(standing);
+}

@@ -1,0 +1,13 @@
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+
+/** Everything the routes need above them; tests pass their own QueryClient. */
+export function AppProviders({
+  queryClient,
+  children,
+}: {
+  queryClient: QueryClient;
+  children: ReactNode;
+}) {
+  return <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
+}

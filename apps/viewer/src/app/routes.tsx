@@ -1,0 +1,24 @@
+import type { RouteObject } from 'react-router-dom';
+import { LoadingBlock } from '@vatside/ui/LoadingBlock';
+import { AppShell } from './shell.tsx';
+import { RouteError } from './route-error.tsx';
+
+/** The viewer's route tree as data. Route modules load lazily and export `Component`. */
+export const routes: RouteObject[] = [
+  {
+    path: '/',
+    element: <AppShell />,
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Opening Vatside…" />,
+    children: [
+      {
+        // Keeps the shell around a failing screen.
+        errorElement: <RouteError />,
+        children: [
+          { index: true, lazy: () => import('./routes/welcome.tsx') },
+          { path: '*', lazy: () => import('./routes/not-found.tsx') },
+        ],
+      },
+    ],
+  },
+];

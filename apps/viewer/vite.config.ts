@@ -1,0 +1,24 @@
+import tailwindcss from '@tailwindcss/vite';
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vitest/config';
+
+const apiOrigin = process.env.VATSIDE_API_ORIGIN ?? 'http://127.0.0.1:4400';
+
+// The server hosts this build at / on the same origin as the API.
+export default defineConfig({
+  base: '/',
+  plugins: [react(), tailwindcss()],
+  server: {
+    host: '127.0.0.1',
+    proxy: {
+      '/api': { target: apiOrigin, changeOrigin: true },
+      '/socket.io': { target: apiOrigin, ws: true, changeOrigin: true },
+    },
+  },
+  build: { outDir: 'dist' },
+  test: {
+    name: 'viewer',
+    environment: 'jsdom',
+    setupFiles: ['./src/testing/setup.ts'],
+  },
+});

@@ -1,0 +1,3 @@
+// Query operators from the one drizzle-orm instance that built the schema, so every package
+// composes queries with matching types (pnpm may install a second copy for better-auth's peers).
+export { and, asc, count, desc, eq, inArray, isNull, ne, or, sql } from 'drizzle-orm';
