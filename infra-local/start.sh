@@ -11,7 +11,7 @@ trap 'stop_services' EXIT
 
 start_services
 migrate_database
-(cd "$VATSIDE_ROOT" && pnpm --silent --filter @vatside/db run seed) || die "Seeding the demo data failed"
+demo_sign_ins=$(cd "$VATSIDE_ROOT/apps/server" && node --import tsx src/seed-cli.ts) || die "Seeding the demo data failed"
 build_apps
 start_app_server
 
@@ -23,6 +23,8 @@ cat <<MSG
     Console (host):    $PUBLIC_ORIGIN/console/
     Health:            $PUBLIC_ORIGIN/api/health
     Mail inbox:        $MAIL_INBOX_URL
+
+$demo_sign_ins
 
   Logs: $VATSIDE_LOG_DIR   Data: $VATSIDE_DATA_DIR
   Press Ctrl-C to stop everything.

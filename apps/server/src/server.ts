@@ -6,6 +6,7 @@ import type { Config } from './config.ts';
 import type { AppDeps } from './deps.ts';
 import { createLogger } from './logger.ts';
 import { createMailer } from './mail/mailer.ts';
+import { createNotifier } from './realtime/notifier.ts';
 import { createRealtime, type RealtimeServer } from './realtime/socket-server.ts';
 import { createObjectStore } from './storage/object-store.ts';
 
@@ -29,9 +30,11 @@ export async function startServer(config: Config): Promise<RunningServer> {
     objectStore: createObjectStore(config),
     mailer,
     auth: createAuth(config, database.db, mailer),
+    notifier: createNotifier(),
   };
   const httpServer = createServer(createApp(deps));
   const io = createRealtime(httpServer, deps);
+  deps.notifier.attach(io);
   await new Promise<void>((resolve, reject) => {
     httpServer.once('error', reject);
     httpServer.listen(config.PORT, config.HOST, resolve);

@@ -19,7 +19,7 @@ import { changeRole, listMembers, removeMember } from '../services/memberships.t
 const invitationIdSchema = z.object({ invitationId: z.string().uuid() });
 const tokenSchema = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/) });
 
-export function membersRouter({ database, mailer, config }: AppDeps): Router {
+export function membersRouter({ database, mailer, config, notifier }: AppDeps): Router {
   const { db } = database;
   const router = Router();
 
@@ -32,12 +32,14 @@ export function membersRouter({ database, mailer, config }: AppDeps): Router {
     const { studio } = await authorizeStudio(db, req, req.params.slug, 'members:manage');
     const { role } = parseInput(roleChangeSchema, req.body, 'role change');
     await changeRole(db, studio.id, req.params.userId, role);
+    notifier.membersChanged(studio);
     res.json({ members: await listMembers(db, studio.id) });
   });
 
   router.delete('/studios/:slug/members/:userId', async (req, res) => {
     const { studio } = await authorizeStudio(db, req, req.params.slug, 'members:manage');
     await removeMember(db, studio.id, req.params.userId);
+    notifier.membersChanged(studio);
     res.json({ members: await listMembers(db, studio.id) });
   });
 
@@ -82,7 +84,9 @@ export function membersRouter({ database, mailer, config }: AppDeps): Router {
   router.post('/invitations/:token/accept', async (req, res) => {
     const person = requireUser(req);
     const { token } = parseInput(tokenSchema, req.params, 'invitation link');
-    res.json(await acceptInvitation(db, token, person));
+    const accepted = await acceptInvitation(db, token, person);
+    notifier.membersChanged({ id: accepted.studioId, slug: accepted.studioSlug });
+    res.json({ studioSlug: accepted.studioSlug });
   });
 
   return router;

@@ -11,7 +11,7 @@ import { parseInput } from '../http/validate.ts';
 import { follow, unfollow } from '../services/memberships.ts';
 import { createStudio, listStudios, studioDetail } from '../services/studios.ts';
 
-export function studiosRouter({ database }: AppDeps): Router {
+export function studiosRouter({ database, notifier }: AppDeps): Router {
   const { db } = database;
   const router = Router();
 
@@ -42,6 +42,7 @@ export function studiosRouter({ database }: AppDeps): Router {
     const { studio } = await authorizeStudio(db, req, req.params.slug, 'studio:follow');
     const { mailOptIn } = parseInput(followSchema, req.body, 'follow request');
     await follow(db, studio.id, person.id, mailOptIn);
+    notifier.membersChanged(studio);
     const { standing } = await authorizeStudio(db, req, req.params.slug, 'studio:read');
     res.json(await studioDetail(db, studio, standing, person.id));
   });
@@ -50,6 +51,7 @@ export function studiosRouter({ database }: AppDeps): Router {
     const person = requireUser(req);
     const { studio, standing } = await authorizeStudio(db, req, req.params.slug, 'studio:follow');
     await unfollow(db, studio.id, person.id, standing);
+    notifier.membersChanged(studio);
     res.json(await studioDetail(db, studio, 'visitor', person.id));
   });
 

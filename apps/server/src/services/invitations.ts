@@ -111,7 +111,7 @@ export async function acceptInvitation(
   db: Database,
   token: string,
   person: { id: string; email: string },
-): Promise<{ studioSlug: string }> {
+): Promise<{ studioId: string; studioSlug: string }> {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .select()
@@ -150,6 +150,6 @@ export async function acceptInvitation(
       .select({ slug: studios.slug })
       .from(studios)
       .where(eq(studios.id, row.studioId));
-    return { studioSlug: studio?.slug ?? '' };
+    return { studioId: row.studioId, studioSlug: studio?.slug ?? '' };
   });
 }
