@@ -9,10 +9,23 @@ import { accountRouter } from './routes/account.ts';
 import { healthRouter } from './routes/health.ts';
 import { membersRouter } from './routes/members.ts';
 import { studiosRouter } from './routes/studios.ts';
+import { workbenchBasesRouter } from './routes/workbench-bases.ts';
+import { workbenchColorwaysRouter } from './routes/workbench-colorways.ts';
+import { workbenchImagesRouter } from './routes/workbench-images.ts';
+import { workbenchShelfRouter } from './routes/workbench-shelf.ts';
 import { serveApps } from './static-apps.ts';
 
 /** Every API router, in one list so the access-matrix test can enumerate the real routes. */
-export const apiRouters = [healthRouter, accountRouter, studiosRouter, membersRouter];
+export const apiRouters = [
+  healthRouter,
+  accountRouter,
+  studiosRouter,
+  membersRouter,
+  workbenchShelfRouter,
+  workbenchBasesRouter,
+  workbenchColorwaysRouter,
+  workbenchImagesRouter,
+];
 
 /** better-auth answers everything under this path itself (sign-up, sign-in, verify, reset, delete). */
 export const authBasePath = '/api/auth';

@@ -29,6 +29,14 @@ const configSchema = z.object({
     .default('local-only-secret-change-me-for-any-real-deployment'),
   /** Attempts per minute per client address on sign-in, sign-up and password reset. */
   AUTH_ATTEMPTS_PER_MINUTE: z.coerce.number().int().positive().default(10),
+  /** Largest image file accepted by the upload pipeline, bytes. */
+  UPLOAD_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(20 * 1024 * 1024),
+  /** Largest image accepted, width × height, checked before decoding (decompression bombs). */
+  UPLOAD_MAX_PIXELS: z.coerce.number().int().positive().default(50_000_000),
   /** Folder with the built apps (apps/<name>/dist); empty serves the API alone. */
   APPS_DIR: z.string().default(''),
 });

@@ -20,6 +20,7 @@ export const errorCodes = [
   'CONFLICT',
   'RATE_LIMITED',
   'UNSUPPORTED_MEDIA_TYPE',
+  'UNPROCESSABLE_IMAGE',
   'MAIL_UNAVAILABLE',
   'INTERNAL',
 ] as const;

@@ -12,6 +12,7 @@ import {
 import { user } from './auth-schema.ts';
 
 export * from './auth-schema.ts';
+export * from './workbench-schema.ts';
 
 /** A dyer's space: its dye shelf, its dye-alongs and its community. */
 export const studios = pgTable('studios', {

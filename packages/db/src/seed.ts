@@ -40,15 +40,13 @@ export async function seedDemo(db: Database, { hashPassword }: SeedOptions): Pro
       .from(account)
       .where(and(eq(account.userId, id), eq(account.providerId, 'credential')));
     if (!existing) {
-      await db
-        .insert(account)
-        .values({
-          id: `${id}-credential`,
-          accountId: id,
-          providerId: 'credential',
-          userId: id,
-          password: passwordHash,
-        });
+      await db.insert(account).values({
+        id: `${id}-credential`,
+        accountId: id,
+        providerId: 'credential',
+        userId: id,
+        password: passwordHash,
+      });
     }
     for (const [slug, role] of Object.entries(person.roles)) {
       const studioId = studioIds.get(slug);

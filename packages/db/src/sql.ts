@@ -1,3 +1,16 @@
 // Query operators from the one drizzle-orm instance that built the schema, so every package
 // composes queries with matching types (pnpm may install a second copy for better-auth's peers).
-export { and, asc, count, desc, eq, inArray, isNull, ne, or, sql } from 'drizzle-orm';
+export {
+  and,
+  asc,
+  count,
+  desc,
+  eq,
+  inArray,
+  isNull,
+  max,
+  ne,
+  notInArray,
+  or,
+  sql,
+} from 'drizzle-orm';

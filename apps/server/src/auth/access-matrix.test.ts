@@ -32,6 +32,117 @@ interface RouteCase {
 const noUser = 'no-such-user';
 const noToken = 'x'.repeat(43);
 
+/** The workbench (issue 5): moderators read, the host edits; ids that name nothing still 404. */
+function workbenchRoutes(): Record<string, RouteCase> {
+  const at = (c: Cast, rest: string) => `/api/studios/${c.slug}${rest}`;
+  const id = () => randomUUID();
+  const read = (rest: () => string): RouteCase => ({ expect: staff, path: (c) => at(c, rest()) });
+  const edit = (rest: () => string, body?: () => unknown): RouteCase => ({
+    expect: hostOnly,
+    path: (c) => at(c, rest()),
+    ...(body ? { body } : {}),
+  });
+  const dye = () => ({ kind: 'acidDyePowder', name: 'Matrix Teal', swatchHex: '#1f6f78' });
+  const base = () => ({
+    name: 'Matrix Sock',
+    fiberContent: [{ fiber: 'wool', pct: 100 }],
+    superwash: true,
+    weightClass: 1,
+    skeinWeightG: 100,
+    skeinLengthM: 400,
+  });
+  const pot = () => ({ name: 'Matrix pot', capacityMl: 8000, material: 'stainlessSteel' });
+  const colorway = () => ({ name: 'Matrix Tide', technique: 'immersion', weightOfGoodsG: 100 });
+  const step = () => ({ instruction: 'Stir gently.', caution: 'hotBath' });
+  const routes: Record<string, RouteCase> = {
+    'GET /api/studios/:slug/dyes': read(() => '/dyes'),
+    'POST /api/studios/:slug/dyes': edit(() => '/dyes', dye),
+    'GET /api/studios/:slug/dyes/:dyeId': read(() => `/dyes/${id()}`),
+    'PATCH /api/studios/:slug/dyes/:dyeId': edit(
+      () => `/dyes/${id()}`,
+      () => ({ name: 'X' }),
+    ),
+    'DELETE /api/studios/:slug/dyes/:dyeId': edit(() => `/dyes/${id()}`),
+    'GET /api/studios/:slug/stock-solutions': read(() => '/stock-solutions'),
+    'POST /api/studios/:slug/stock-solutions': edit(
+      () => '/stock-solutions',
+      () => ({ dyeId: id(), stockStrengthPct: 1, volumeMadeMl: 500, madeOn: '2026-03-01' }),
+    ),
+    'GET /api/studios/:slug/stock-solutions/:stockId': read(() => `/stock-solutions/${id()}`),
+    'PATCH /api/studios/:slug/stock-solutions/:stockId': edit(
+      () => `/stock-solutions/${id()}`,
+      () => ({ stockStrengthPct: 2 }),
+    ),
+    'DELETE /api/studios/:slug/stock-solutions/:stockId': edit(() => `/stock-solutions/${id()}`),
+    'POST /api/studios/:slug/stock-solutions/:stockId/adjustments': edit(
+      () => `/stock-solutions/${id()}/adjustments`,
+      () => ({ volumeLeftMl: 100, reason: 'Measured the jar.' }),
+    ),
+    'GET /api/studios/:slug/bases': read(() => '/bases'),
+    'POST /api/studios/:slug/bases': edit(() => '/bases', base),
+    'GET /api/studios/:slug/bases/:baseId': read(() => `/bases/${id()}`),
+    'PATCH /api/studios/:slug/bases/:baseId': edit(
+      () => `/bases/${id()}`,
+      () => ({ lot: 'M1' }),
+    ),
+    'DELETE /api/studios/:slug/bases/:baseId': edit(() => `/bases/${id()}`),
+    'GET /api/studios/:slug/pots': read(() => '/pots'),
+    'POST /api/studios/:slug/pots': edit(() => '/pots', pot),
+    'GET /api/studios/:slug/pots/:potId': read(() => `/pots/${id()}`),
+    'PATCH /api/studios/:slug/pots/:potId': edit(
+      () => `/pots/${id()}`,
+      () => ({ name: 'P' }),
+    ),
+    'DELETE /api/studios/:slug/pots/:potId': edit(() => `/pots/${id()}`),
+    'GET /api/studios/:slug/colorways': read(() => '/colorways'),
+    'POST /api/studios/:slug/colorways': edit(() => '/colorways', colorway),
+    'GET /api/studios/:slug/colorways/:colorwayId': read(() => `/colorways/${id()}`),
+    'PATCH /api/studios/:slug/colorways/:colorwayId': edit(
+      () => `/colorways/${id()}`,
+      () => ({ notes: 'Matrix' }),
+    ),
+    'DELETE /api/studios/:slug/colorways/:colorwayId': edit(() => `/colorways/${id()}`),
+    'GET /api/studios/:slug/colorways/:colorwayId/amounts': read(
+      () => `/colorways/${id()}/amounts?weightOfGoodsG=115`,
+    ),
+    'GET /api/studios/:slug/colorways/:colorwayId/steps': read(() => `/colorways/${id()}/steps`),
+    'POST /api/studios/:slug/colorways/:colorwayId/steps': edit(
+      () => `/colorways/${id()}/steps`,
+      step,
+    ),
+    'PUT /api/studios/:slug/colorways/:colorwayId/steps/order': edit(
+      () => `/colorways/${id()}/steps/order`,
+      () => ({ stepIds: [id()] }),
+    ),
+    'PATCH /api/studios/:slug/colorways/:colorwayId/steps/:stepId': edit(
+      () => `/colorways/${id()}/steps/${id()}`,
+      () => ({ instruction: 'Rinse.' }),
+    ),
+    'DELETE /api/studios/:slug/colorways/:colorwayId/steps/:stepId': edit(
+      () => `/colorways/${id()}/steps/${id()}`,
+    ),
+    'GET /api/studios/:slug/images': read(() => '/images'),
+    // JSON instead of a photo: the host gets a 400, everyone else is refused before it is read.
+    'POST /api/studios/:slug/images': edit(
+      () => '/images',
+      () => ({ purpose: 'inspiration' }),
+    ),
+    'GET /api/studios/:slug/images/:imageId': read(() => `/images/${id()}`),
+    'DELETE /api/studios/:slug/images/:imageId': edit(() => `/images/${id()}`),
+    'GET /api/studios/:slug/images/:imageId/web': read(() => `/images/${id()}/web`),
+    'GET /api/studios/:slug/images/:imageId/thumb': read(() => `/images/${id()}/thumb`),
+    'PUT /api/studios/:slug/images/:imageId/palette': edit(
+      () => `/images/${id()}/palette`,
+      () => ({ swatches: [] }),
+    ),
+    'POST /api/studios/:slug/images/:imageId/palette/pick': edit(
+      () => `/images/${id()}/palette/pick`,
+      () => ({ x: 0.5, y: 0.5 }),
+    ),
+  };
+  return routes;
+}
+
 /** Every API route: a route missing here (or listed but gone) fails the first test. */
 const routes: Record<string, RouteCase> = {
   'GET /api/health': { expect: everyone, path: () => '/api/health' },
@@ -92,6 +203,7 @@ const routes: Record<string, RouteCase> = {
     expect: signedIn,
     path: () => `/api/invitations/${noToken}/accept`,
   },
+  ...workbenchRoutes(),
 };
 
 type SocketExpect = 'ok' | 'UNAUTHENTICATED' | 'FORBIDDEN';

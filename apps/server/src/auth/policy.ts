@@ -10,6 +10,9 @@ export const studioPolicy = {
   'members:read': ['moderator', 'host'],
   'members:manage': ['host'],
   'invitations:manage': ['host'],
+  // The workbench (dye shelf, bases, pots, colorways, images): helpers read, the host edits.
+  'workbench:read': ['moderator', 'host'],
+  'workbench:edit': ['host'],
 } as const satisfies Record<string, readonly StudioStanding[]>;
 
 export type StudioAction = keyof typeof studioPolicy;

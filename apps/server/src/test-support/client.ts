@@ -15,11 +15,13 @@ export class TestClient {
     const headers: Record<string, string> = { origin: this.server.deps.config.PUBLIC_ORIGIN };
     if (this.cookies.size > 0)
       headers.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
-    if (body !== undefined) headers['content-type'] = 'application/json';
+    // FormData (uploads) sets its own multipart content type; anything else goes as JSON.
+    const form = body instanceof FormData;
+    if (body !== undefined && !form) headers['content-type'] = 'application/json';
     const res = await fetch(`${this.server.url}${path}`, {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : form ? body : JSON.stringify(body),
       redirect: 'manual',
     });
     for (const line of res.headers.getSetCookie()) {

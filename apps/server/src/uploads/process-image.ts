@@ -1,0 +1,145 @@
+import { randomUUID } from 'node:crypto';
+import sharp, { type Sharp } from 'sharp';
+import { describeColor, extractPalette, hexToLab } from '@vatside/dye-kit';
+import type { StoredSwatch } from '@vatside/db/schema';
+import { HttpError } from '../http/errors.ts';
+import { refuseTrailingData, sniffImageType } from './sniff.ts';
+
+// The upload pipeline after the bytes arrive: sniff → pixel limit (before decoding) → refuse
+// trailing data → orient → sRGB → strip metadata → web rendition and thumbnail → palette.
+
+export const WEB_MAX_PX = 1600;
+export const THUMB_MAX_PX = 400;
+/** The palette is found on a small copy: plenty of pixels for k-means, quick to decode. */
+const PALETTE_MAX_PX = 256;
+const OUTPUT_TYPE = 'image/jpeg';
+
+export interface Rendition {
+  data: Buffer;
+  width: number;
+  height: number;
+  contentType: string;
+}
+
+export interface ProcessedImage {
+  web: Rendition;
+  thumb: Rendition;
+  palette: StoredSwatch[];
+}
+
+export interface ProcessOptions {
+  maxPixels: number;
+  swatchCount: number;
+}
+
+const unreadable = () =>
+  new HttpError(
+    422,
+    'UNPROCESSABLE_IMAGE',
+    'This image could not be read; it may be damaged. Save it again and upload that copy.',
+  );
+
+/** Reads only the header: width × height is checked before a single pixel is decoded. */
+async function refuseTooManyPixels(bytes: Uint8Array, maxPixels: number): Promise<void> {
+  const header = await sharp(bytes, { limitInputPixels: false })
+    .metadata()
+    .catch(() => {
+      throw unreadable();
+    });
+  const { width = 0, height = 0 } = header;
+  if (width * height > maxPixels) {
+    const megapixels = (maxPixels / 1e6).toFixed(0);
+    throw new HttpError(
+      422,
+      'UNPROCESSABLE_IMAGE',
+      `This image is ${width} × ${height} pixels, more than the ${megapixels} megapixels we accept. Resize it and try again.`,
+    );
+  }
+}
+
+/**
+ * A fresh JPEG: orientation applied, converted from its embedded profile (e.g. Display P3) to
+ * sRGB, transparency flattened onto white. Without `keepMetadata`/`withMetadata` sharp writes
+ * no EXIF, XMP, IPTC or ICC data.
+ */
+async function render(input: Sharp, maxPx: number): Promise<Rendition> {
+  const { data, info } = await input
+    .resize({ width: maxPx, height: maxPx, fit: 'inside', withoutEnlargement: true })
+    .flatten({ background: '#ffffff' })
+    .toColourspace('srgb')
+    .jpeg({ quality: 82, mozjpeg: true })
+    .toBuffer({ resolveWithObject: true });
+  return { data, width: info.width, height: info.height, contentType: OUTPUT_TYPE };
+}
+
+export async function paletteOf(web: Buffer, swatchCount: number): Promise<StoredSwatch[]> {
+  const { data, info } = await sharp(web)
+    .resize({ width: PALETTE_MAX_PX, height: PALETTE_MAX_PX, fit: 'inside' })
+    .ensureAlpha()
+    .raw()
+    .toBuffer({ resolveWithObject: true });
+  const swatches = extractPalette(
+    { data, width: info.width, height: info.height },
+    { count: swatchCount },
+  );
+  return swatches.map((s) => ({ id: randomUUID(), ...s, label: '' }));
+}
+
+export async function processImage(
+  bytes: Uint8Array,
+  options: ProcessOptions,
+): Promise<ProcessedImage> {
+  const type = await sniffImageType(bytes);
+  await refuseTooManyPixels(bytes, options.maxPixels);
+  refuseTrailingData(bytes, type);
+  try {
+    // `failOn: 'error'` refuses damaged and truncated data; `rotate()` applies EXIF orientation.
+    const decoded = sharp(bytes, { limitInputPixels: options.maxPixels, failOn: 'error' }).rotate();
+    const web = await render(decoded, WEB_MAX_PX);
+    const thumb = await render(sharp(web.data), THUMB_MAX_PX);
+    return { web, thumb, palette: await paletteOf(web.data, options.swatchCount) };
+  } catch (error) {
+    if (error instanceof HttpError) throw error;
+    throw unreadable();
+  }
+}
+
+const hex2 = (n: number) => Math.round(n).toString(16).padStart(2, '0');
+
+/** Radius of the averaged square around a picked point: evens out JPEG noise. */
+const PICK_RADIUS_PX = 2;
+
+/** The color under a point (fractions of width and height) of a rendition, as a swatch. */
+export async function swatchAt(
+  rendition: Uint8Array,
+  x: number,
+  y: number,
+  label: string,
+): Promise<StoredSwatch> {
+  const { data, info } = await sharp(rendition)
+    .removeAlpha()
+    .raw()
+    .toBuffer({ resolveWithObject: true });
+  const cx = Math.min(info.width - 1, Math.floor(x * info.width));
+  const cy = Math.min(info.height - 1, Math.floor(y * info.height));
+  const sum = [0, 0, 0];
+  let n = 0;
+  for (
+    let py = Math.max(0, cy - PICK_RADIUS_PX);
+    py <= Math.min(info.height - 1, cy + PICK_RADIUS_PX);
+    py++
+  ) {
+    for (
+      let px = Math.max(0, cx - PICK_RADIUS_PX);
+      px <= Math.min(info.width - 1, cx + PICK_RADIUS_PX);
+      px++
+    ) {
+      const at = (py * info.width + px) * info.channels;
+      for (let c = 0; c < 3; c++) sum[c]! += data[at + c]!;
+      n++;
+    }
+  }
+  const hex = `#${sum.map((s) => hex2(s / n)).join('')}`;
+  const lab = hexToLab(hex);
+  return { id: randomUUID(), hex, lab, share: null, name: describeColor(lab).name, label };
+}
