@@ -3,7 +3,7 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
 import { AppProviders } from './app/providers.tsx';
 import { router } from './app/router.tsx';
-import { createQueryClient } from './lib/query-client.ts';
+import { createQueryClient } from '@vatside/ui/query-client.ts';
 import './index.css';
 
 const root = document.getElementById('root');

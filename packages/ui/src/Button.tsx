@@ -1,11 +1,11 @@
-import type { ButtonHTMLAttributes } from 'react';
+import type { ComponentPropsWithRef } from 'react';
 import { cx } from './cx.ts';
 
 type ButtonVariant = 'primary' | 'secondary' | 'danger';
 /** `md` is 48px tall; `hand` is the one-hand size: 64px tall and full width. */
 type ButtonSize = 'md' | 'hand';
 
-export type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & {
+export type ButtonProps = ComponentPropsWithRef<'button'> & {
   variant?: ButtonVariant;
   size?: ButtonSize;
 };

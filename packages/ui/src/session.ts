@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
 import { meSchema, type Me } from '@vatside/contracts/account';
 import type { StudioStanding } from '@vatside/contracts/roles';
 import { ApiError, apiGet } from './api-client.ts';
@@ -25,4 +25,10 @@ export function useMe() {
 export function standingIn(me: Me | null | undefined, slug: string | undefined): StudioStanding {
   const membership = me?.memberships.find((m) => m.studio.slug === slug);
   return membership?.role ?? 'visitor';
+}
+
+/** After signing out or deleting the account: nothing cached belongs to anyone now. */
+export function forgetSession(queryClient: QueryClient) {
+  queryClient.setQueryData(meQueryOptions().queryKey, null);
+  void queryClient.invalidateQueries({ predicate: (query) => query.queryKey[0] !== 'me' });
 }

@@ -1,4 +1,8 @@
-import { NavLink, Outlet } from 'react-router-dom';
+import { AccountBadge } from '@vatside/ui/account/AccountBadge';
+import { useSignOut } from '@vatside/ui/account/use-sign-out.ts';
+import { useMe } from '@vatside/ui/session.ts';
+import { NavLink, Outlet, useParams } from 'react-router-dom';
+import { StudioSwitcher } from '../features/studios/components/StudioSwitcher.tsx';
 
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
   [
@@ -7,6 +11,10 @@ const navLinkClass = ({ isActive }: { isActive: boolean }) =>
   ].join(' ');
 
 export function AppShell() {
+  const { slug } = useParams();
+  const { data: me } = useMe();
+  const signOut = useSignOut();
+
   return (
     <div className="flex min-h-dvh flex-col">
       <a
@@ -16,7 +24,7 @@ export function AppShell() {
         Skip to content
       </a>
       <header className="bg-vat-900 text-wool-50 [--vs-focus:var(--color-marigold-300)]">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-8 gap-y-2 px-6 py-3">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-6 py-3">
           <NavLink to="/" className="flex min-h-12 items-center gap-3 rounded-lg">
             <DyeStripes />
             <span className="font-display text-3xl font-semibold tracking-tight">Vatside</span>
@@ -24,13 +32,30 @@ export function AppShell() {
               Console
             </span>
           </NavLink>
-          <nav aria-label="Console sections" className="flex gap-2">
+          <StudioSwitcher currentSlug={slug} />
+          <nav aria-label="Console sections" className="flex flex-wrap gap-2">
             <NavLink to="/" end className={navLinkClass}>
               Studio desk
             </NavLink>
+            {slug ? (
+              <NavLink to={`/studios/${slug}/members`} className={navLinkClass}>
+                Members
+              </NavLink>
+            ) : null}
           </nav>
-          {/* Who is signed in, and their role in this studio, arrives with sign-in. */}
-          <div data-slot="account" className="ml-auto min-h-12" />
+          <div className="ml-auto flex flex-wrap items-center gap-2">
+            <AccountBadge studioSlug={slug} />
+            {me ? (
+              <button
+                type="button"
+                onClick={() => signOut.mutate()}
+                disabled={signOut.isPending}
+                className="inline-flex min-h-12 items-center rounded-lg px-4 font-bold text-wool-50 underline underline-offset-4 hover:bg-vat-800"
+              >
+                Sign out
+              </button>
+            ) : null}
+          </div>
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-6 py-8">

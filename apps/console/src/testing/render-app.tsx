@@ -5,10 +5,16 @@ import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { AppProviders } from '../app/providers.tsx';
 import { routes } from '../app/routes.tsx';
 
-/** Renders the real route tree at `path`, with a fresh cache and no automatic retries. */
+/**
+ * Renders the real route tree at `path` (inside the console's /console base path, as served),
+ * with a fresh cache and no automatic retries.
+ */
 export function renderApp(path = '/') {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const router = createMemoryRouter(routes, { initialEntries: [path] });
+  const router = createMemoryRouter(routes, {
+    basename: '/console',
+    initialEntries: [`/console${path === '/' ? '' : path}`],
+  });
   const user = userEvent.setup();
   render(
     <AppProviders queryClient={queryClient}>

@@ -1,4 +1,5 @@
 import type { RouteObject } from 'react-router-dom';
+import { accountRoutes } from '@vatside/ui/account/account-routes';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { AppShell } from './shell.tsx';
 import { RouteError } from './route-error.tsx';
@@ -16,6 +17,8 @@ export const routes: RouteObject[] = [
         errorElement: <RouteError />,
         children: [
           { index: true, lazy: () => import('./routes/welcome.tsx') },
+          ...accountRoutes,
+          { path: 's/:slug', lazy: () => import('./routes/studio-page.tsx') },
           { path: '*', lazy: () => import('./routes/not-found.tsx') },
         ],
       },

@@ -1,4 +1,5 @@
-import { NavLink, Outlet } from 'react-router-dom';
+import { NavLink, Outlet, useParams } from 'react-router-dom';
+import { AccountBadge } from '@vatside/ui/account/AccountBadge';
 import { SafetyNote } from '@vatside/ui/SafetyNote';
 
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
@@ -8,6 +9,7 @@ const navLinkClass = ({ isActive }: { isActive: boolean }) =>
   ].join(' ');
 
 export function AppShell() {
+  const { slug } = useParams();
   return (
     <div className="flex min-h-dvh flex-col">
       <a
@@ -27,8 +29,9 @@ export function AppShell() {
               Studios
             </NavLink>
           </nav>
-          {/* Who is signed in arrives with sign-in. */}
-          <div data-slot="account" className="ml-auto" />
+          <div className="ml-auto">
+            <AccountBadge studioSlug={slug} />
+          </div>
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-3xl flex-1 px-4 py-6">

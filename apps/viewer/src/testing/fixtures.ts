@@ -1,4 +1,5 @@
-import type { StudioList } from '@vatside/contracts/studios';
+import type { Me } from '@vatside/contracts/account';
+import type { StudioDetail, StudioList, StudioSummary } from '@vatside/contracts/studios';
 
 // Invented studios; any likeness to a real one is accidental.
 export const studioList: StudioList = {
@@ -19,3 +20,30 @@ export const studioList: StudioList = {
     },
   ],
 };
+
+export const [kelpwhistle] = studioList.studios as [StudioSummary];
+
+/** A dyer who follows no studio yet. */
+export const adaMe: Me = {
+  profile: {
+    id: 'u-ada',
+    name: 'Ada Quill',
+    email: 'ada.quill@example.test',
+    emailVerified: true,
+    timeZone: 'UTC',
+    unitSystem: 'us',
+    defaultSkeinWeightG: 100,
+  },
+  memberships: [],
+};
+
+export const kelpwhistleDetail = (
+  changes: Partial<Pick<StudioDetail, 'myRole' | 'mailOptIn' | 'followerCount'>> = {},
+): StudioDetail => ({
+  ...kelpwhistle,
+  hostNames: ['Marin Doe'],
+  followerCount: 1204,
+  myRole: 'visitor',
+  mailOptIn: false,
+  ...changes,
+});

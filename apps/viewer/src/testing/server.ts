@@ -1,6 +1,21 @@
+import type { Me } from '@vatside/contracts/account';
 import { http, HttpResponse } from 'msw';
 import { setupServer } from 'msw/node';
 import { studioList } from './fixtures.ts';
 
-/** The happy path; a test overrides one handler with `server.use` to try a failure. */
-export const server = setupServer(http.get('/api/studios', () => HttpResponse.json(studioList)));
+const signedOut = () =>
+  HttpResponse.json(
+    { error: { code: 'UNAUTHENTICATED', message: 'Sign in first.' } },
+    { status: 401 },
+  );
+
+/** The happy path for a visitor; a test overrides one handler with `server.use`. */
+export const server = setupServer(
+  http.get('/api/me', signedOut),
+  http.get('/api/studios', () => HttpResponse.json(studioList)),
+);
+
+/** From now on, /api/me answers as this person. */
+export function signIn(me: Me) {
+  server.use(http.get('/api/me', () => HttpResponse.json(me)));
+}

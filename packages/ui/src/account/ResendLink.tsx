@@ -21,7 +21,9 @@ export function ResendLink({ email, next }: { email: string; next: string | unde
         {resend.isPending ? 'Sending…' : 'Send a new link'}
       </Button>
       <div aria-live="polite">
-        {resend.isSuccess ? <p className="font-bold">A new link is on its way to {email}.</p> : null}
+        {resend.isSuccess ? (
+          <p className="font-bold">A new link is on its way to {email}.</p>
+        ) : null}
         {resend.error ? <p className="font-bold text-madder-700">{resend.error.message}</p> : null}
       </div>
     </div>

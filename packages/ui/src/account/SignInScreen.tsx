@@ -10,6 +10,7 @@ import { formResolver } from '../form/form-resolver.ts';
 import { showServerError } from '../form/server-errors.ts';
 import { TextField } from '../form/TextField.tsx';
 import { textLinkClass } from '../link-class.ts';
+import { meQueryOptions } from '../session.ts';
 import { AccountFrame } from './AccountFrame.tsx';
 import { safeNext, withNext } from './next-path.ts';
 import { ResendLink } from './ResendLink.tsx';
@@ -44,8 +45,10 @@ export function SignInScreen() {
       showServerError(error, setError, ['email', 'password']);
       return;
     }
-    // Everything cached so far was fetched as a visitor.
-    await queryClient.invalidateQueries();
+    // Everything cached so far was fetched as a visitor. Who is here must be known before
+    // moving on (guarded screens would send the person back), the rest can follow.
+    await queryClient.invalidateQueries({ queryKey: meQueryOptions().queryKey });
+    void queryClient.invalidateQueries({ predicate: (query) => query.queryKey[0] !== 'me' });
     navigate(next ?? '/', { replace: true });
   });
 
@@ -54,7 +57,10 @@ export function SignInScreen() {
       <form noValidate onSubmit={onSubmit} className="space-y-5">
         {errors.root?.server ? <FormAlert>{errors.root.server.message}</FormAlert> : null}
         {unconfirmed ? (
-          <div role="alert" className="space-y-2 rounded-xl border-2 border-marigold-500 bg-marigold-100 p-4">
+          <div
+            role="alert"
+            className="space-y-2 rounded-xl border-2 border-marigold-500 bg-marigold-100 p-4"
+          >
             <p className="font-bold">Confirm your address first</p>
             <p>
               We sent a link to {unconfirmed}. Open it, then sign in here. No mail after a few
@@ -92,4 +98,3 @@ export function SignInScreen() {
     </AccountFrame>
   );
 }
-

@@ -1,6 +1,5 @@
-import { useId, type ReactNode, type Ref, type SelectHTMLAttributes } from 'react';
-import { cx } from '../cx.ts';
-import { FieldError, fieldInputClass } from './TextField.tsx';
+import type { ReactNode, Ref, SelectHTMLAttributes } from 'react';
+import { FieldFrame, fieldInputClass } from './FieldFrame.tsx';
 
 export type SelectFieldProps = SelectHTMLAttributes<HTMLSelectElement> & {
   label: string;
@@ -9,32 +8,21 @@ export type SelectFieldProps = SelectHTMLAttributes<HTMLSelectElement> & {
   ref?: Ref<HTMLSelectElement>;
 };
 
-export function SelectField({ label, hint, error, className, ref, children, ...select }: SelectFieldProps) {
-  const id = useId();
-  const hintId = `${id}-hint`;
-  const errorId = `${id}-error`;
-  const describedBy = [hint && hintId, error && errorId].filter(Boolean).join(' ') || undefined;
+export function SelectField({
+  label,
+  hint,
+  error,
+  className,
+  children,
+  ...select
+}: SelectFieldProps) {
   return (
-    <div className={cx('space-y-1', className)}>
-      <label htmlFor={id} className="block font-bold">
-        {label}
-      </label>
-      {hint ? (
-        <div id={hintId} className="text-sm text-vat-800">
-          {hint}
-        </div>
-      ) : null}
-      <select
-        id={id}
-        ref={ref}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy}
-        className={fieldInputClass}
-        {...select}
-      >
-        {children}
-      </select>
-      <FieldError id={errorId} message={error} />
-    </div>
+    <FieldFrame label={label} hint={hint} error={error} className={className}>
+      {(control) => (
+        <select className={fieldInputClass} {...select} {...control}>
+          {children}
+        </select>
+      )}
+    </FieldFrame>
   );
 }

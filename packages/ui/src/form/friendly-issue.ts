@@ -18,7 +18,9 @@ export function friendlyIssue(issue: z.core.$ZodRawIssue): string | undefined {
     case 'invalid_type':
       return issue.expected === 'number' ? 'Enter a number.' : 'Fill this in.';
     case 'invalid_format':
-      return issue.format === 'email' ? 'Enter an e-mail address like marin@example.test.' : undefined;
+      return issue.format === 'email'
+        ? 'Enter an e-mail address like marin@example.test.'
+        : undefined;
     default:
       return undefined;
   }

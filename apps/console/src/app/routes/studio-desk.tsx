@@ -1,4 +1,5 @@
 import { ServiceCheck } from '../../features/health/components/ServiceCheck.tsx';
+import { MyStudios } from '../../features/studios/components/MyStudios.tsx';
 import { StudioList } from '../../features/studios/components/StudioList.tsx';
 
 /** Studio desk: the console's first screen. */
@@ -12,12 +13,20 @@ export function Component() {
         </p>
       </div>
       <div className="grid items-start gap-8 lg:grid-cols-[1fr_22rem]">
-        <section aria-labelledby="studios-title" className="space-y-4">
-          <h2 id="studios-title" className="font-display text-2xl font-semibold">
-            Studios
-          </h2>
-          <StudioList />
-        </section>
+        <div className="space-y-8">
+          <section aria-labelledby="my-studios-title" className="space-y-4">
+            <h2 id="my-studios-title" className="font-display text-2xl font-semibold">
+              Your studios
+            </h2>
+            <MyStudios />
+          </section>
+          <section aria-labelledby="studios-title" className="space-y-4">
+            <h2 id="studios-title" className="font-display text-2xl font-semibold">
+              All studios on Vatside
+            </h2>
+            <StudioList />
+          </section>
+        </div>
         <ServiceCheck />
       </div>
     </div>

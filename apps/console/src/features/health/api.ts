@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { healthSchema } from '@vatside/contracts/health';
-import { apiGet } from '../../lib/api-client.ts';
+import { apiGet } from '@vatside/ui/api-client.ts';
 
 export const healthQueryOptions = () =>
   queryOptions({

@@ -17,6 +17,10 @@ describe('Welcome', () => {
     expect(cards[0]).toHaveTextContent('Studio color');
     expect(cards[0]).toHaveTextContent('#2a7f86');
     expect(cards[1]).toHaveTextContent('Brindlemoor Vats');
+    expect(within(cards[0]!).getByRole('link', { name: 'Kelpwhistle Dyeworks' })).toHaveAttribute(
+      'href',
+      '/s/kelpwhistle-dyeworks',
+    );
     expect(screen.queryByText('Finding studios…')).not.toBeInTheDocument();
   });
 

@@ -3,6 +3,7 @@ import { Card } from '@vatside/ui/Card';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { Swatch } from '@vatside/ui/Swatch';
+import { Link } from 'react-router-dom';
 import { studiosQueryOptions } from '../api.ts';
 
 export function StudioCards() {
@@ -34,10 +35,23 @@ export function StudioCards() {
   return (
     <ul className="grid gap-4 md:grid-cols-2">
       {data.studios.map((studio) => (
-        <Card as="li" key={studio.id} padded={false} className="overflow-hidden">
+        <Card
+          as="li"
+          key={studio.id}
+          padded={false}
+          className="relative overflow-hidden has-focus-visible:outline-3 has-focus-visible:outline-offset-3 has-focus-visible:outline-vat-700"
+        >
           <div aria-hidden="true" className="h-4" style={{ backgroundColor: studio.accentHex }} />
           <div className="space-y-3 p-5">
-            <h3 className="font-display text-2xl font-semibold">{studio.name}</h3>
+            <h3 className="font-display text-2xl font-semibold">
+              {/* The whole card is the touch target; the link text stays the studio's name. */}
+              <Link
+                to={`/s/${studio.slug}`}
+                className="underline-offset-4 outline-none after:absolute after:inset-0 hover:underline"
+              >
+                {studio.name}
+              </Link>
+            </h3>
             <p className="text-lg">{studio.tagline}</p>
             <Swatch hex={studio.accentHex} label="Studio color" showHex />
           </div>

@@ -1,0 +1,71 @@
+import { useQuery } from '@tanstack/react-query';
+import { RequireSignIn } from '@vatside/ui/account/RequireSignIn';
+import { ErrorPanel } from '@vatside/ui/ErrorPanel';
+import { LoadingBlock } from '@vatside/ui/LoadingBlock';
+import { Outlet, useParams } from 'react-router-dom';
+import { studioQueryOptions } from '../../features/studios/api.ts';
+
+/** Every /studios/:slug screen: signed in, and a host or moderator of that studio. */
+export function Component() {
+  const { slug = '' } = useParams();
+  return (
+    <RequireSignIn>
+      <StudioGate slug={slug} />
+    </RequireSignIn>
+  );
+}
+
+function StudioGate({ slug }: { slug: string }) {
+  const {
+    data: studio,
+    error,
+    isPending,
+    isFetching,
+    refetch,
+  } = useQuery(studioQueryOptions(slug));
+  if (isPending) return <LoadingBlock label="Opening the studio…" />;
+  if (error) {
+    return (
+      <ErrorPanel
+        title="This studio could not be opened"
+        error={error}
+        onRetry={() => void refetch()}
+        retrying={isFetching}
+      />
+    );
+  }
+  if (studio.myRole !== 'host' && studio.myRole !== 'moderator') {
+    return (
+      <section className="max-w-xl space-y-4">
+        <h1 className="font-display text-3xl font-semibold">{studio.name}</h1>
+        <p className="text-lg">
+          This part of the console is for the studio’s hosts and moderators. You can still follow
+          the studio on its public page.
+        </p>
+        {/* The public page belongs to the viewer app, outside the console's base path. */}
+        <a
+          href={`/s/${studio.slug}`}
+          className="inline-flex min-h-12 items-center rounded-xl border-2 border-vat-800 px-5 font-bold hover:bg-vat-100"
+        >
+          Open the public page
+        </a>
+      </section>
+    );
+  }
+  return (
+    <div className="space-y-6">
+      <div className="flex items-center gap-4">
+        <span
+          aria-hidden="true"
+          className="h-14 w-3 shrink-0 rounded-full"
+          style={{ backgroundColor: studio.accentHex }}
+        />
+        <div>
+          <h1 className="font-display text-4xl font-semibold">{studio.name}</h1>
+          {studio.tagline ? <p className="text-lg text-vat-800">{studio.tagline}</p> : null}
+        </div>
+      </div>
+      <Outlet />
+    </div>
+  );
+}
