@@ -62,7 +62,7 @@ describe('a deep link into each app is served its shell', () => {
     await page.getByRole('heading').first().waitFor();
     await expect(
       page
-        .getByText(/not found|no page|can't find|cannot find/i)
+        .getByText(/nothing at this address/i)
         .first()
         .isVisible(),
     ).resolves.toBe(true);

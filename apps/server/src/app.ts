@@ -6,7 +6,9 @@ import { attachSession } from './auth/authorize.ts';
 import type { AppDeps } from './deps.ts';
 import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
 import { accountRouter } from './routes/account.ts';
+import { dyeAlongsRouter } from './routes/dye-alongs.ts';
 import { healthRouter } from './routes/health.ts';
+import { mailUnsubscribeRouter } from './routes/mail-unsubscribe.ts';
 import { membersRouter } from './routes/members.ts';
 import { studiosRouter } from './routes/studios.ts';
 import { workbenchBasesRouter } from './routes/workbench-bases.ts';
@@ -25,6 +27,8 @@ export const apiRouters = [
   workbenchBasesRouter,
   workbenchColorwaysRouter,
   workbenchImagesRouter,
+  dyeAlongsRouter,
+  mailUnsubscribeRouter,
 ];
 
 /** better-auth answers everything under this path itself (sign-up, sign-in, verify, reset, delete). */

@@ -37,6 +37,18 @@ const configSchema = z.object({
     .default(20 * 1024 * 1024),
   /** Largest image accepted, width × height, checked before decoding (decompression bombs). */
   UPLOAD_MAX_PIXELS: z.coerce.number().int().positive().default(50_000_000),
+  /** Runs the mail job (announcements, reminders) in this process; off lets another do it. */
+  MAIL_WORKER_ENABLED: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((v) => v === 'true'),
+  /** How often the mail job looks for due mails, ms. */
+  MAIL_WORKER_POLL_MS: z.coerce.number().int().min(10).max(600_000).default(2_000),
+  /** Mails handled per pass before the job checks whether it should stop. */
+  MAIL_WORKER_BATCH: z.coerce.number().int().min(1).max(1_000).default(50),
+  /** First retry after a failed send, ms; doubles per attempt. */
+  MAIL_RETRY_BASE_MS: z.coerce.number().int().min(1).max(86_400_000).default(60_000),
+  MAIL_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(50).default(8),
   /** Folder with the built apps (apps/<name>/dist); empty serves the API alone. */
   APPS_DIR: z.string().default(''),
 });

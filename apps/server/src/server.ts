@@ -4,6 +4,7 @@ import { createApp } from './app.ts';
 import { createAuth } from './auth/auth.ts';
 import type { Config } from './config.ts';
 import type { AppDeps } from './deps.ts';
+import { startMailWorker, type MailWorker } from './jobs/mail-worker.ts';
 import { createLogger } from './logger.ts';
 import { createMailer } from './mail/mailer.ts';
 import { createNotifier } from './realtime/notifier.ts';
@@ -14,6 +15,8 @@ export interface RunningServer {
   deps: AppDeps;
   httpServer: HttpServer;
   io: RealtimeServer;
+  /** The mail job, when this process runs it (MAIL_WORKER_ENABLED). */
+  mailWorker: MailWorker | null;
   url: string;
   close(): Promise<void>;
 }
@@ -39,14 +42,25 @@ export async function startServer(config: Config): Promise<RunningServer> {
     httpServer.once('error', reject);
     httpServer.listen(config.PORT, config.HOST, resolve);
   });
+  const mailWorker = config.MAIL_WORKER_ENABLED
+    ? startMailWorker(deps, {
+        pollMs: config.MAIL_WORKER_POLL_MS,
+        batchSize: config.MAIL_WORKER_BATCH,
+        retryBaseMs: config.MAIL_RETRY_BASE_MS,
+        maxAttempts: config.MAIL_MAX_ATTEMPTS,
+      })
+    : null;
   const address = httpServer.address();
   const port = typeof address === 'object' && address ? address.port : config.PORT;
   return {
     deps,
     httpServer,
     io,
+    mailWorker,
     url: `http://${config.HOST}:${port}`,
     async close() {
+      // The mail in hand is finished and recorded before the database goes away.
+      await mailWorker?.stop();
       await io.close(); // also closes the HTTP server
       deps.objectStore.close();
       deps.mailer.close();

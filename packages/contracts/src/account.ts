@@ -50,9 +50,11 @@ export const membershipSchema = z.object({
 });
 export type Membership = z.infer<typeof membershipSchema>;
 
-/** GET /api/me */
 export const meSchema = z.object({
   profile: profileSchema,
   memberships: z.array(membershipSchema),
 });
 export type Me = z.infer<typeof meSchema>;
+
+/** GET /api/me: the signed-in person, or null for a visitor (an answer, not an error). */
+export const meOrVisitorSchema = meSchema.nullable();

@@ -13,6 +13,7 @@ import { user } from './auth-schema.ts';
 
 export * from './auth-schema.ts';
 export * from './workbench-schema.ts';
+export * from './dye-along-schema.ts';
 
 /** A dyer's space: its dye shelf, its dye-alongs and its community. */
 export const studios = pgTable('studios', {

@@ -1,20 +1,13 @@
 import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
-import { meSchema, type Me } from '@vatside/contracts/account';
+import { meOrVisitorSchema, type Me } from '@vatside/contracts/account';
 import type { StudioStanding } from '@vatside/contracts/roles';
-import { ApiError, apiGet } from './api-client.ts';
+import { apiGet } from './api-client.ts';
 
-/** Who is signed in; `null` for a visitor (401 is an answer here, not a failure). */
+/** Who is signed in; `null` for a visitor. */
 export const meQueryOptions = () =>
   queryOptions({
     queryKey: ['me'],
-    queryFn: async ({ signal }): Promise<Me | null> => {
-      try {
-        return await apiGet('/api/me', meSchema, { signal });
-      } catch (error) {
-        if (error instanceof ApiError && error.status === 401) return null;
-        throw error;
-      }
-    },
+    queryFn: ({ signal }): Promise<Me | null> => apiGet('/api/me', meOrVisitorSchema, { signal }),
   });
 
 export function useMe() {

@@ -143,10 +143,63 @@ function workbenchRoutes(): Record<string, RouteCase> {
   return routes;
 }
 
+/**
+ * Dye-alongs (issue 6): moderators read, the host plans and moves them on; the public page and
+ * what hangs off it answer anyone (an id that names nothing is a 404 for everyone).
+ */
+function dyeAlongRoutes(): Record<string, RouteCase> {
+  const at = (c: Cast, rest: string) => `/api/studios/${c.slug}/dye-alongs${rest}`;
+  const one = () => `/${randomUUID()}`;
+  const open = (rest: () => string): RouteCase => ({ expect: everyone, path: (c) => at(c, rest()) });
+  const edit = (rest: () => string, body?: () => unknown): RouteCase => ({
+    expect: hostOnly,
+    path: (c) => at(c, rest()),
+    ...(body ? { body } : {}),
+  });
+  const inAMonth = () => new Date(Date.now() + 30 * 86_400_000).toISOString();
+  const badToken = 'bm90LWEtdG9rZW4.bm90LWEtc2lnbmF0dXJl';
+  return {
+    'GET /api/studios/:slug/dye-alongs': open(() => '?month=2026-12'),
+    'POST /api/studios/:slug/dye-alongs': edit(
+      () => '',
+      () => ({ title: 'Matrix tide', startsAt: inAMonth(), timeZone: 'America/Halifax' }),
+    ),
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId': {
+      expect: staff,
+      path: (c) => at(c, one()),
+    },
+    'PATCH /api/studios/:slug/dye-alongs/:dyeAlongId': edit(one, () => ({ title: 'Matrix' })),
+    'DELETE /api/studios/:slug/dye-alongs/:dyeAlongId': edit(one),
+    'POST /api/studios/:slug/dye-alongs/:dyeAlongId/transitions': edit(
+      () => `${one()}/transitions`,
+      () => ({ to: 'announced' }),
+    ),
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/public': open(() => `${one()}/public`),
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/supply-list': open(
+      () => `${one()}/supply-list?weightOfGoodsG=50&system=us`,
+    ),
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/calendar.ics': open(
+      () => `${one()}/calendar.ics`,
+    ),
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/inspiration/web': open(
+      () => `${one()}/inspiration/web`,
+    ),
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/inspiration/thumb': open(
+      () => `${one()}/inspiration/thumb`,
+    ),
+    // No sign-in: the signed token is the permission (a forged one is a 400).
+    'GET /api/mail/unsubscribe': { expect: everyone, path: () => `/api/mail/unsubscribe?token=${badToken}` },
+    'POST /api/mail/unsubscribe': {
+      expect: everyone,
+      path: () => `/api/mail/unsubscribe?token=${badToken}`,
+    },
+  };
+}
+
 /** Every API route: a route missing here (or listed but gone) fails the first test. */
 const routes: Record<string, RouteCase> = {
   'GET /api/health': { expect: everyone, path: () => '/api/health' },
-  'GET /api/me': { expect: signedIn, path: () => '/api/me' },
+  'GET /api/me': { expect: everyone, path: () => '/api/me' },
   'PATCH /api/me/profile': {
     expect: signedIn,
     path: () => '/api/me/profile',
@@ -204,6 +257,7 @@ const routes: Record<string, RouteCase> = {
     path: () => `/api/invitations/${noToken}/accept`,
   },
   ...workbenchRoutes(),
+  ...dyeAlongRoutes(),
 };
 
 type SocketExpect = 'ok' | 'UNAUTHENTICATED' | 'FORBIDDEN';

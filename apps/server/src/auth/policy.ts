@@ -13,6 +13,10 @@ export const studioPolicy = {
   // The workbench (dye shelf, bases, pots, colorways, images): helpers read, the host edits.
   'workbench:read': ['moderator', 'host'],
   'workbench:edit': ['host'],
+  // Dye-alongs: helpers see drafts and the e-mail counts; the host plans and moves them on.
+  // Once announced, the public page is read with 'studio:read'.
+  'dyeAlong:read': ['moderator', 'host'],
+  'dyeAlong:edit': ['host'],
 } as const satisfies Record<string, readonly StudioStanding[]>;
 
 export type StudioAction = keyof typeof studioPolicy;

@@ -4,7 +4,7 @@ import type { Config } from '../config.ts';
 
 export type OutgoingMail = Pick<
   Mail.Options,
-  'to' | 'subject' | 'text' | 'html' | 'headers' | 'attachments' | 'icalEvent'
+  'to' | 'subject' | 'text' | 'html' | 'headers' | 'attachments' | 'icalEvent' | 'messageId'
 >;
 
 export interface Mailer {

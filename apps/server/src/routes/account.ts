@@ -8,7 +8,7 @@ import { me, updateProfile } from '../services/account.ts';
 export function accountRouter({ database }: AppDeps): Router {
   const router = Router();
   router.get('/me', async (req, res) => {
-    res.json(await me(database.db, requireUser(req).id));
+    res.json(req.user ? await me(database.db, req.user.id) : null);
   });
   router.patch('/me/profile', async (req, res) => {
     const person = requireUser(req);

@@ -15,6 +15,9 @@ export function startTestServer(
       PORT: '0',
       LOG_LEVEL: 'silent',
       APPS_DIR: '',
+      // Tests that need the mail job turn it on, so other tests' servers never send their mails.
+      MAIL_WORKER_ENABLED: 'false',
+      MAIL_WORKER_POLL_MS: '50',
       ...overrides,
     }),
   );

@@ -3,11 +3,8 @@ import { http, HttpResponse } from 'msw';
 import { setupServer } from 'msw/node';
 import { studioList } from './fixtures.ts';
 
-const signedOut = () =>
-  HttpResponse.json(
-    { error: { code: 'UNAUTHENTICATED', message: 'Sign in first.' } },
-    { status: 401 },
-  );
+// A visitor: the server answers "nobody" rather than an error.
+const signedOut = () => HttpResponse.json(null);
 
 /** The happy path for a visitor; a test overrides one handler with `server.use`. */
 export const server = setupServer(
