@@ -85,7 +85,9 @@ describe('a new viewer signs up on a phone and follows the studio', () => {
     await page.getByRole('button', { name: 'Unfollow' }).waitFor();
     // A thumb lands on the switch's visible label; the checkbox inside is for screen readers.
     await page.getByText('E-mail me about dye-alongs').click();
-    await expect.poll(() => page.getByRole('switch', { name: 'E-mail me about dye-alongs' }).isChecked()).toBe(true);
+    await expect
+      .poll(() => page.getByRole('switch', { name: 'E-mail me about dye-alongs' }).isChecked())
+      .toBe(true);
 
     await expect
       .poll(async () => {
