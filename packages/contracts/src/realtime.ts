@@ -26,7 +26,7 @@ export type StudioWatch = z.infer<typeof studioWatchSchema>;
 
 export interface RealtimeError {
   error: {
-    code: 'VALIDATION_FAILED' | 'UNAUTHENTICATED' | 'FORBIDDEN' | 'NOT_FOUND';
+    code: 'VALIDATION_FAILED' | 'UNAUTHENTICATED' | 'FORBIDDEN' | 'NOT_FOUND' | 'CONFLICT';
     message: string;
   };
 }
