@@ -8,6 +8,7 @@ import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
 import { accountRouter } from './routes/account.ts';
 import { dyeAlongsRouter } from './routes/dye-alongs.ts';
 import { healthRouter } from './routes/health.ts';
+import { liveRouter } from './routes/live.ts';
 import { mailUnsubscribeRouter } from './routes/mail-unsubscribe.ts';
 import { membersRouter } from './routes/members.ts';
 import { studiosRouter } from './routes/studios.ts';
@@ -29,6 +30,7 @@ export const apiRouters = [
   workbenchImagesRouter,
   dyeAlongsRouter,
   mailUnsubscribeRouter,
+  liveRouter,
 ];
 
 /** better-auth answers everything under this path itself (sign-up, sign-in, verify, reset, delete). */

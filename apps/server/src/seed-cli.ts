@@ -3,12 +3,19 @@ import { connectDatabase } from '@vatside/db/client';
 import { demoPassword, demoPeople } from '@vatside/db/demo-data';
 import { seedDemo } from '@vatside/db/seed';
 import { loadConfig } from './config.ts';
+import { seedTidePool } from './seed/tide-pool.ts';
+import { createObjectStore } from './storage/object-store.ts';
 
-// Lives in the server package because demo passwords are hashed the way sign-in checks them.
-const handle = connectDatabase(loadConfig().DATABASE_URL, 1);
+// Lives in the server package because demo passwords are hashed the way sign-in checks them,
+// and the tide-pool month's image goes through the server's upload pipeline.
+const config = loadConfig();
+const handle = connectDatabase(config.DATABASE_URL, 1);
+const objectStore = createObjectStore(config);
 try {
   await seedDemo(handle.db, { hashPassword });
+  await seedTidePool({ db: handle.db, objectStore, maxPixels: config.UPLOAD_MAX_PIXELS });
 } finally {
+  objectStore.close();
   await handle.close();
 }
 

@@ -67,3 +67,4 @@ export const studioInvitations = pgTable(
   },
   (t) => [index('studio_invitations_studio_idx').on(t.studioId)],
 );
+export * from './live-schema.ts';

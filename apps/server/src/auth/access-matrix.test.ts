@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRouters } from '../app.ts';
 import { clientEventNames } from '../realtime/socket-server.ts';
 import type { RunningServer } from '../server.ts';
+import { makeLiveSessions, type TestLive } from '../test-support/live-fixtures.ts';
 import { castStudio, personaNames, type Cast, type PersonaName } from '../test-support/personas.ts';
 import { startTestServer } from '../test-support/test-server.ts';
 
@@ -150,7 +151,10 @@ function workbenchRoutes(): Record<string, RouteCase> {
 function dyeAlongRoutes(): Record<string, RouteCase> {
   const at = (c: Cast, rest: string) => `/api/studios/${c.slug}/dye-alongs${rest}`;
   const one = () => `/${randomUUID()}`;
-  const open = (rest: () => string): RouteCase => ({ expect: everyone, path: (c) => at(c, rest()) });
+  const open = (rest: () => string): RouteCase => ({
+    expect: everyone,
+    path: (c) => at(c, rest()),
+  });
   const edit = (rest: () => string, body?: () => unknown): RouteCase => ({
     expect: hostOnly,
     path: (c) => at(c, rest()),
@@ -188,10 +192,31 @@ function dyeAlongRoutes(): Record<string, RouteCase> {
       () => `${one()}/inspiration/thumb`,
     ),
     // No sign-in: the signed token is the permission (a forged one is a 400).
-    'GET /api/mail/unsubscribe': { expect: everyone, path: () => `/api/mail/unsubscribe?token=${badToken}` },
+    'GET /api/mail/unsubscribe': {
+      expect: everyone,
+      path: () => `/api/mail/unsubscribe?token=${badToken}`,
+    },
     'POST /api/mail/unsubscribe': {
       expect: everyone,
       path: () => `/api/mail/unsubscribe?token=${badToken}`,
+    },
+  };
+}
+
+let live: TestLive;
+
+/** The live session (issue 7): the host starts one; anyone may find and read a public one. */
+function liveRoutes(): Record<string, RouteCase> {
+  return {
+    'POST /api/studios/:slug/dye-alongs/:dyeAlongId/live-sessions': {
+      expect: hostOnly,
+      path: (c) => `/api/studios/${c.slug}/dye-alongs/${randomUUID()}/live-sessions`,
+      body: () => ({ mode: 'rehearsal' }),
+    },
+    'GET /api/studios/:slug/live': { expect: everyone, path: (c) => `/api/studios/${c.slug}/live` },
+    'GET /api/live-sessions/:sessionId/program': {
+      expect: everyone,
+      path: () => `/api/live-sessions/${live.liveSessionId}/program`,
     },
   };
 }
@@ -258,22 +283,42 @@ const routes: Record<string, RouteCase> = {
   },
   ...workbenchRoutes(),
   ...dyeAlongRoutes(),
+  ...liveRoutes(),
 };
 
-type SocketExpect = 'ok' | 'UNAUTHENTICATED' | 'FORBIDDEN';
-const socketEvents: Record<
-  (typeof clientEventNames)[number],
-  { expect: Record<PersonaName, SocketExpect>; payload: (c: Cast) => unknown }
-> = {
-  'clock:ping': {
-    expect: { visitor: 'ok', viewer: 'ok', moderator: 'ok', host: 'ok', otherHost: 'ok' },
+type SocketExpect = 'ok' | 'UNAUTHENTICATED' | 'FORBIDDEN' | 'NOT_FOUND';
+const all = (e: SocketExpect): Record<PersonaName, SocketExpect> => ({
+  visitor: e,
+  viewer: e,
+  moderator: e,
+  host: e,
+  otherHost: e,
+});
+
+interface SocketCase {
+  event: (typeof clientEventNames)[number];
+  label: string;
+  expect: Record<PersonaName, SocketExpect>;
+  payload: (c: Cast) => unknown;
+}
+
+/** Every client event, some in more than one situation (a public session, a rehearsal). */
+const socketCases: SocketCase[] = [
+  {
+    event: 'clock:ping',
+    label: 'clock:ping',
+    expect: all('ok'),
     payload: () => ({ clientSentAtMs: Date.now() }),
   },
-  'studio:watch': {
-    expect: { visitor: 'ok', viewer: 'ok', moderator: 'ok', host: 'ok', otherHost: 'ok' },
+  {
+    event: 'studio:watch',
+    label: 'studio:watch',
+    expect: all('ok'),
     payload: (c) => ({ slug: c.slug }),
   },
-  'members:watch': {
+  {
+    event: 'members:watch',
+    label: 'members:watch',
     expect: {
       visitor: 'UNAUTHENTICATED',
       viewer: 'FORBIDDEN',
@@ -283,7 +328,49 @@ const socketEvents: Record<
     },
     payload: (c) => ({ slug: c.slug }),
   },
-};
+  {
+    event: 'live:join',
+    label: 'live:join a live session',
+    expect: all('ok'),
+    payload: () => ({ sessionId: live.liveSessionId }),
+  },
+  {
+    event: 'live:join',
+    label: 'live:join a rehearsal',
+    expect: { ...all('NOT_FOUND'), host: 'ok' },
+    payload: () => ({ sessionId: live.rehearsalId }),
+  },
+  {
+    event: 'live:action',
+    label: 'live:action on a live session',
+    expect: {
+      visitor: 'UNAUTHENTICATED',
+      viewer: 'FORBIDDEN',
+      moderator: 'FORBIDDEN',
+      host: 'ok',
+      otherHost: 'FORBIDDEN',
+    },
+    payload: () => ({
+      sessionId: live.liveSessionId,
+      action: { type: 'note:push', text: 'Matrix note' },
+    }),
+  },
+  {
+    event: 'live:action',
+    label: 'live:action on a rehearsal',
+    expect: { ...all('NOT_FOUND'), host: 'ok' },
+    payload: () => ({
+      sessionId: live.rehearsalId,
+      action: { type: 'note:push', text: 'Matrix note' },
+    }),
+  },
+  {
+    event: 'live:leave',
+    label: 'live:leave',
+    expect: all('ok'),
+    payload: () => ({ sessionId: live.liveSessionId }),
+  },
+];
 
 interface RouteLayer {
   route?: { path: string; methods: Record<string, boolean> };
@@ -296,6 +383,7 @@ describe('access matrix: every route and socket event against every role', () =>
   beforeAll(async () => {
     server = await startTestServer();
     cast = await castStudio(server, 'matrix');
+    live = await makeLiveSessions(cast.clients.host, cast.slug);
   });
   afterAll(() => server.close());
 
@@ -337,15 +425,15 @@ describe('access matrix: every route and socket event against every role', () =>
       });
       const wrong: string[] = [];
       try {
-        for (const [event, spec] of Object.entries(socketEvents)) {
+        for (const spec of socketCases) {
           const reply = (await socket
             .timeout(5000)
-            .emitWithAck(event as 'studio:watch', spec.payload(cast) as { slug: string })) as {
+            .emitWithAck(spec.event as 'studio:watch', spec.payload(cast) as { slug: string })) as {
             error?: { code: string };
           };
           const got = reply.error?.code ?? 'ok';
           if (got !== spec.expect[persona])
-            wrong.push(`${event}: expected ${spec.expect[persona]}, got ${got}`);
+            wrong.push(`${spec.label}: expected ${spec.expect[persona]}, got ${got}`);
         }
       } finally {
         socket.disconnect();
@@ -355,6 +443,8 @@ describe('access matrix: every route and socket event against every role', () =>
   }
 
   it('lists exactly the socket events the server handles', () => {
-    expect([...clientEventNames].sort()).toEqual(Object.keys(socketEvents).sort());
+    expect([...clientEventNames].sort()).toEqual(
+      [...new Set(socketCases.map((c) => c.event))].sort(),
+    );
   });
 });

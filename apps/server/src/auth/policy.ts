@@ -17,6 +17,8 @@ export const studioPolicy = {
   // Once announced, the public page is read with 'studio:read'.
   'dyeAlong:read': ['moderator', 'host'],
   'dyeAlong:edit': ['host'],
+  // Only the host starts a live session or a rehearsal and drives the pots.
+  'live:run': ['host'],
 } as const satisfies Record<string, readonly StudioStanding[]>;
 
 export type StudioAction = keyof typeof studioPolicy;

@@ -33,9 +33,21 @@ export async function enqueueDyeAlongMails(
   if (recipients.length === 0) return 0;
   const reminderAt = reminderDueAt(dyeAlong.startsAt, now);
   const rows = recipients.flatMap(({ userId }) => [
-    { kind: 'announcement' as const, dyeAlongId: dyeAlong.id, recipientUserId: userId, runAfter: now },
+    {
+      kind: 'announcement' as const,
+      dyeAlongId: dyeAlong.id,
+      recipientUserId: userId,
+      runAfter: now,
+    },
     ...(reminderAt
-      ? [{ kind: 'reminder' as const, dyeAlongId: dyeAlong.id, recipientUserId: userId, runAfter: reminderAt }]
+      ? [
+          {
+            kind: 'reminder' as const,
+            dyeAlongId: dyeAlong.id,
+            recipientUserId: userId,
+            runAfter: reminderAt,
+          },
+        ]
       : []),
   ]);
   await tx

@@ -53,7 +53,12 @@ export function startMailWorker(deps: AppDeps, options: MailWorkerOptions): Mail
   /** Builds and sends one row's mail inside the claiming transaction. */
   async function deliver(tx: Tx, row: OutboxRow): Promise<void> {
     const [found] = await tx
-      .select({ dyeAlong: dyeAlongs, studio: studios, person: user, optIn: studioMembers.mailOptIn })
+      .select({
+        dyeAlong: dyeAlongs,
+        studio: studios,
+        person: user,
+        optIn: studioMembers.mailOptIn,
+      })
       .from(dyeAlongs)
       .innerJoin(studios, eq(studios.id, dyeAlongs.studioId))
       .innerJoin(user, eq(user.id, row.recipientUserId))
@@ -94,23 +99,23 @@ export function startMailWorker(deps: AppDeps, options: MailWorkerOptions): Mail
   async function send(
     tx: Tx,
     row: OutboxRow,
-    { dyeAlong, studio, person, now }: {
+    {
+      dyeAlong,
+      studio,
+      person,
+      now,
+    }: {
       dyeAlong: typeof dyeAlongs.$inferSelect;
       studio: typeof studios.$inferSelect;
       person: typeof user.$inferSelect;
       now: Date;
     },
   ): Promise<void> {
-    const view = await publicDyeAlong(
-      db,
-      { slug: studio.slug, name: studio.name },
-      dyeAlong,
-      {
-        weightOfGoodsG: person.defaultSkeinWeightG,
-        system: person.unitSystem === 'metric' ? 'metric' : 'us',
-        timeZone: person.timeZone,
-      },
-    );
+    const view = await publicDyeAlong(db, { slug: studio.slug, name: studio.name }, dyeAlong, {
+      weightOfGoodsG: person.defaultSkeinWeightG,
+      system: person.unitSystem === 'metric' ? 'metric' : 'us',
+      timeZone: person.timeZone,
+    });
     const token = unsubscribeToken(deps.config.BETTER_AUTH_SECRET, {
       studioId: studio.id,
       userId: person.id,

@@ -82,10 +82,11 @@ export function dyeAlongMail(input: DyeAlongMailInput): OutgoingMail {
   const sections = [
     ...(input.kind === 'announcement'
       ? [
-          ...supplySections(view.supplyList).map((s) => ({
-            ...s,
-            title: `${s.title} (one ${fmt(skein)} g skein of each colorway, ${units})`,
-          })),
+          {
+            title: `What you need for one ${fmt(skein)} g skein of each colorway (${units})`,
+            items: [],
+          },
+          ...supplySections(view.supplyList),
         ]
       : []),
     ...(input.kind === 'reminder' || input.includePrep ? prepSections(view.prepChecklist) : []),
@@ -102,7 +103,9 @@ export function dyeAlongMail(input: DyeAlongMailInput): OutgoingMail {
     '',
     ...when,
     '',
-    ...sections.flatMap((s) => [s.title, ...s.items.map((i) => `- ${i}`), '']),
+    ...sections.flatMap((s) =>
+      s.items.length ? [s.title, ...s.items.map((i) => `- ${i}`), ''] : [`${s.title}:`, ''],
+    ),
     ...closing,
     '',
     footer,
@@ -113,7 +116,7 @@ export function dyeAlongMail(input: DyeAlongMailInput): OutgoingMail {
     ...when.map(p),
     ...sections.map(
       (s) =>
-        `<h3>${escapeHtml(s.title)}</h3><ul>${s.items.map((i) => `<li>${escapeHtml(i)}</li>`).join('')}</ul>`,
+        `<h3>${escapeHtml(s.title)}</h3>${s.items.length ? `<ul>${s.items.map((i) => `<li>${escapeHtml(i)}</li>`).join('')}</ul>` : ''}`,
     ),
     `<p><a href="${escapeHtml(input.pageUrl)}">Your amounts, the palette and the full checklist</a></p>`,
     p(closing[1]!),

@@ -15,6 +15,7 @@ import { studios } from '@vatside/db/schema';
 import { studioStanding, type SessionUser } from '../auth/authorize.ts';
 import { can, type StudioAction } from '../auth/policy.ts';
 import type { AppDeps } from '../deps.ts';
+import { createLiveHub } from '../live/live-hub.ts';
 
 interface SocketData {
   user: SessionUser | null;
@@ -26,7 +27,7 @@ export type RealtimeServer = Server<
   Record<string, never>,
   SocketData
 >;
-type RealtimeSocket = Socket<
+export type RealtimeSocket = Socket<
   ClientToServerEvents,
   ServerToClientEvents,
   Record<string, never>,
@@ -38,6 +39,9 @@ export const clientEventNames = [
   'clock:ping',
   'studio:watch',
   'members:watch',
+  'live:join',
+  'live:leave',
+  'live:action',
 ] as const satisfies readonly (keyof ClientToServerEvents)[];
 
 export const staffRoom = (studioId: string) => `studio:${studioId}:staff`;
@@ -95,7 +99,23 @@ export function createRealtime(
     };
   }
 
+  const live = createLiveHub(io, database.db);
+
   io.on('connection', (socket) => {
+    socket.on(
+      'live:join',
+      handle(socket, (payload) => live.join(socket, payload)),
+    );
+    socket.on(
+      'live:leave',
+      handle(socket, (payload) => live.leave(socket, payload)),
+    );
+    socket.on(
+      'live:action',
+      handle(socket, (payload) => live.act(socket, payload)),
+    );
+    socket.on('disconnecting', () => live.onDisconnecting(socket));
+
     socket.emit('server:hello', { serverAtMs: Date.now(), signedIn: socket.data.user !== null });
 
     socket.on(

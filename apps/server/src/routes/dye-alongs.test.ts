@@ -1,11 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { errorBodySchema } from '@vatside/contracts/errors';
 import type { SupplyList } from '@vatside/contracts/dye-along-supplies';
-import type {
-  DyeAlongDetail,
-  DyeAlongList,
-  PublicDyeAlong,
-} from '@vatside/contracts/dye-alongs';
+import type { DyeAlongDetail, DyeAlongList, PublicDyeAlong } from '@vatside/contracts/dye-alongs';
 import type { Image } from '@vatside/contracts/workbench-images';
 import type { RunningServer } from '../server.ts';
 import type { TestClient } from '../test-support/client.ts';
@@ -78,7 +74,10 @@ describe('dye-alongs: lifecycle, visibility, month lists, supplies', () => {
         startsAt: new Date(Date.now() + 3600_000).toISOString(),
         colorwayIds: [month.colorway.id],
       });
-      await refused(await move(soon.id, 'live'), /one step at a time: from draft it goes to announced/);
+      await refused(
+        await move(soon.id, 'live'),
+        /one step at a time: from draft it goes to announced/,
+      );
       await json(await move(soon.id, 'announced'), 200);
       await json(await move(soon.id, 'draft'), 200); // withdrawn before going live: allowed
       await json(await move(soon.id, 'announced'), 200);
@@ -243,7 +242,10 @@ describe('dye-alongs: lifecycle, visibility, month lists, supplies', () => {
       expect(ics.headers.get('content-type')).toMatch(/^text\/calendar/);
       expect(await ics.text()).toMatch(/DTSTART:20270213T180000Z/);
 
-      const listed = await json<DyeAlongList>(await visitor.request('GET', at('?month=2027-02')), 200);
+      const listed = await json<DyeAlongList>(
+        await visitor.request('GET', at('?month=2027-02')),
+        200,
+      );
       expect(listed.items.map((d) => d.id)).toContain(draftId);
       // The host's own detail (with mail counts) stays with staff.
       expect((await visitor.request('GET', at(`/${draftId}`))).status).toBe(401);
@@ -257,7 +259,11 @@ describe('dye-alongs: lifecycle, visibility, month lists, supplies', () => {
       const { supplyList } = await json<{ supplyList: SupplyList }>(res, 200);
       // Two 100 g skeins at 1 % from a 1 % stock: 2 × 100 × 1 ÷ 1 = 200 mL.
       expect(supplyList.dyes[0]?.volumeMl).toBeCloseTo(200, 9);
-      expect(supplyList.yarn[0]).toMatchObject({ name: 'Shoreline Sock', skeins: 2, totalWeightG: 200 });
+      expect(supplyList.yarn[0]).toMatchObject({
+        name: 'Shoreline Sock',
+        skeins: 2,
+        totalWeightG: 200,
+      });
     });
   });
 

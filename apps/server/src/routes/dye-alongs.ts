@@ -50,7 +50,12 @@ export function dyeAlongsRouter({ database, objectStore, config }: AppDeps): Rou
   async function readable(req: Request<{ slug: string }>) {
     const access = await authorizeStudio(db, req, req.params.slug, 'studio:read');
     const seesDrafts = can(access.standing, 'dyeAlong:read');
-    const row = await visibleDyeAlongRow(db, access.studio.id, idParam(req, 'dyeAlongId'), seesDrafts);
+    const row = await visibleDyeAlongRow(
+      db,
+      access.studio.id,
+      idParam(req, 'dyeAlongId'),
+      seesDrafts,
+    );
     return { ...access, row };
   }
 

@@ -11,6 +11,8 @@ const OVERNIGHT_SOAK_S = 3 * 3600;
 /** Common practice: at least half an hour so the fiber wets through and takes dye evenly. */
 const SHORTEST_SOAK_MIN = 30;
 
+/** "A syringe marked in mL" → "a syringe marked in mL" (the unit keeps its case). */
+const lowerFirst = (t: string) => t.charAt(0).toLowerCase() + t.slice(1);
 const fmt = (n: number) => String(Number(n.toPrecision(3)));
 
 function acidWords(a: SupplyList['acid'][number]): string {
@@ -117,7 +119,7 @@ export function prepChecklist(
   add(
     hourBefore,
     'set-out-equipment',
-    `Set out the equipment: ${supplies.equipment.map((e) => e.item.replace(/^Pot: /, '').toLowerCase()).join(', ')}.`,
+    `Set out the equipment: ${supplies.equipment.map((e) => lowerFirst(e.item.replace(/^Pot: /, ''))).join(', ')}.`,
     'commonPractice',
   );
   for (const acid of supplies.acid) {

@@ -149,7 +149,9 @@ function equipmentFor(
   const biggestBathMl = Math.max(0, ...baths.map((b) => b.bathVolumeMl));
   const minPotMl = biggestBathMl / POT_FILL_FRACTION;
   if (target.scope === 'hostBatch') {
-    const pots = unique(colorways.flatMap((c) => (c.pot ? [c.pot] : [])));
+    const pots = [
+      ...new Map(colorways.flatMap((c) => (c.pot ? [[c.pot.name, c.pot] as const] : []))).values(),
+    ];
     for (const pot of pots) {
       const aluminum =
         pot.material === 'aluminum' ? ' Aluminum reacts with acid: use another pot.' : '';

@@ -37,7 +37,9 @@ export async function supplyColorways(
   const baseIds = list.flatMap((c) => (c.baseId ? [c.baseId] : []));
   const potIds = list.flatMap((c) => (c.potId ? [c.potId] : []));
   const stockIds = list.flatMap((c) =>
-    c.recipeLines.flatMap((l) => (l.kind === 'stock' && l.stockSolutionId ? [l.stockSolutionId] : [])),
+    c.recipeLines.flatMap((l) =>
+      l.kind === 'stock' && l.stockSolutionId ? [l.stockSolutionId] : [],
+    ),
   );
   const [baseRows, potRows, stepRows, liquidStocks] = await Promise.all([
     baseIds.length ? db.select().from(bases).where(inArray(bases.id, baseIds)) : [],

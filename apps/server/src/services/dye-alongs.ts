@@ -210,8 +210,9 @@ function checkShareWindow(opens: Date | null, closes: Date | null) {
   }
 }
 
-const prepItems = (items: { id?: string | undefined; text: string; when: StoredPrepItem['when'] }[]) =>
-  items.map((i) => ({ id: i.id ?? randomUUID(), text: i.text, when: i.when }));
+const prepItems = (
+  items: { id?: string | undefined; text: string; when: StoredPrepItem['when'] }[],
+) => items.map((i) => ({ id: i.id ?? randomUUID(), text: i.text, when: i.when }));
 
 async function setColorways(tx: Tx, dyeAlongId: string, ids: string[]) {
   await tx.delete(dyeAlongColorways).where(eq(dyeAlongColorways.dyeAlongId, dyeAlongId));
@@ -284,7 +285,9 @@ export async function updateDyeAlong(
     }
     const timeZone = patch.timeZone ?? row.timeZone;
     // A new zone alone keeps the host's wall-clock time ("2 PM") and moves the instant.
-    const local = patch.startsAtLocal ?? (patch.timeZone && !patch.startsAt ? zonedTime(row.startsAt, row.timeZone).local : undefined);
+    const local =
+      patch.startsAtLocal ??
+      (patch.timeZone && !patch.startsAt ? zonedTime(row.startsAt, row.timeZone).local : undefined);
     const startsAt = local
       ? instantFromLocal(local, timeZone, patch.startsAtLocal ? 'startsAtLocal' : 'timeZone')
       : patch.startsAt
@@ -300,9 +303,14 @@ export async function updateDyeAlong(
     }
     if (row.status === 'announced') {
       if (startMoved && startsAt <= now) {
-        throw new HttpError(400, 'VALIDATION_FAILED', 'An announced dye-along starts in the future.', {
-          startsAt: ['Pick a start in the future, or move it back to draft first.'],
-        });
+        throw new HttpError(
+          400,
+          'VALIDATION_FAILED',
+          'An announced dye-along starts in the future.',
+          {
+            startsAt: ['Pick a start in the future, or move it back to draft first.'],
+          },
+        );
       }
       if (patch.colorwayIds?.length === 0) {
         throw new HttpError(400, 'VALIDATION_FAILED', 'An announced dye-along needs a colorway.', {

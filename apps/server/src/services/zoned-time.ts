@@ -16,7 +16,9 @@ export function instantFromLocal(local: string, timeZone: string, field = 'start
   // A wall-clock time in a spring-forward gap does not exist; TZDate moves it an hour on.
   if (Number.isNaN(zoned.getTime()) || format(zoned, LOCAL_FORMAT) !== local) {
     throw new HttpError(400, 'VALIDATION_FAILED', 'That time does not exist on that day.', {
-      [field]: [`${local} does not exist in ${timeZone} (the clocks change then); pick another time.`],
+      [field]: [
+        `${local} does not exist in ${timeZone} (the clocks change then); pick another time.`,
+      ],
     });
   }
   return new Date(zoned.getTime());

@@ -64,7 +64,11 @@ export async function makeMonth(host: TestClient, slug: string): Promise<TestMon
       caution: 'hotBath',
     },
     { instruction: 'Add the vinegar and stir.', caution: 'acid' },
-    { instruction: 'Add the dye stock.', recipeLineId: colorway.recipeLines[0]!.id, caution: 'hotBath' },
+    {
+      instruction: 'Add the dye stock.',
+      recipeLineId: colorway.recipeLines[0]!.id,
+      caution: 'hotBath',
+    },
   ];
   for (const step of steps) await post(`/colorways/${colorway.id}/steps`, step);
   return { base, jar, colorway };
@@ -112,6 +116,8 @@ export async function addFollowers(
   await db.insert(user).values(rows);
   await db
     .insert(studioMembers)
-    .values(rows.map((r) => ({ studioId, userId: r.id, role: 'viewer' as const, mailOptIn: true })));
+    .values(
+      rows.map((r) => ({ studioId, userId: r.id, role: 'viewer' as const, mailOptIn: true })),
+    );
   return rows.map((r) => ({ userId: r.id, email: r.email, name: r.name, timeZone: r.timeZone }));
 }
