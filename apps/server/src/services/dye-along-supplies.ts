@@ -1,13 +1,11 @@
+import { toDyeKitRecipe } from '@vatside/contracts/recipe';
 import {
   acidFor,
   convert,
   scaleRecipe,
   toHouseholdMeasure,
-  type ColorantId,
   type HouseholdMeasure,
   type MeasureSystem,
-  type Recipe,
-  type RecipeLine,
 } from '@vatside/dye-kit';
 import type {
   ColorwayBath,
@@ -90,25 +88,6 @@ const household = (m: HouseholdMeasure): Household => ({
   measuredMl: m.measuredMl,
   tooSmallToMeasure: m.tooSmallToMeasure,
 });
-
-function recipeOf(c: SupplyColorway): Recipe {
-  const lines = c.recipeLines.map((line): RecipeLine => {
-    if (line.kind === 'stock') {
-      const { dyeName, stockStrengthPct, depthOfShadePct } = line;
-      return { kind: 'stock', dyeName, stockStrengthPct, depthOfShadePct };
-    }
-    const { colorName, amountPer100g, unit, dropsPerMl, colorants } = line;
-    return {
-      kind: 'foodColor',
-      colorName,
-      amountPer100g,
-      unit,
-      ...(dropsPerMl !== undefined ? { dropsPerMl } : {}),
-      ...(colorants?.length ? { colorants: colorants as ColorantId[] } : {}),
-    };
-  });
-  return { weightOfGoodsG: c.weightOfGoodsG, liquorRatio: c.liquorRatio, acid: c.acid, lines };
-}
 
 function dyeKey(line: StoredRecipeLine): string {
   if (line.kind === 'stock') {
@@ -225,7 +204,7 @@ export function supplyList(
   let usesPowder = false;
 
   for (const c of colorways) {
-    const recipe = recipeOf(c);
+    const recipe = toDyeKitRecipe(c, c.recipeLines);
     const scaled = withDyeKit('', () =>
       scaleRecipe(recipe, {
         ...(target.scope === 'hostBatch'

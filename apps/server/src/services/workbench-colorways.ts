@@ -1,3 +1,4 @@
+import { toDyeKitRecipe } from '@vatside/contracts/recipe';
 import { randomUUID } from 'node:crypto';
 import { and, count, desc, eq, notInArray } from '@vatside/db/sql';
 import {
@@ -5,12 +6,10 @@ import {
   recipeWarnings,
   scaleRecipe,
   validateRecipe,
-  type ColorantId,
   type DyeKitWarning,
   type FiberPart,
   type MeasureSystem,
   type Recipe,
-  type RecipeLine,
   type ScaleTarget,
 } from '@vatside/dye-kit';
 import { DYE_SAFETY_NOTE, type PageQuery } from '@vatside/contracts/workbench-common';
@@ -52,33 +51,6 @@ const toSummary = (row: ColorwayRow): ColorwaySummary => ({
   notes: row.notes,
   ...isoTimestamps(row),
 });
-
-/** The dye-kit Recipe inside a colorway: the lines without our ids and shelf links. */
-function recipeOf(
-  row: Pick<ColorwayRow, 'weightOfGoodsG' | 'liquorRatio' | 'acid' | 'recipeLines'>,
-): Recipe {
-  const lines = row.recipeLines.map((line): RecipeLine => {
-    if (line.kind === 'stock') {
-      const { dyeName, stockStrengthPct, depthOfShadePct } = line;
-      return { kind: 'stock', dyeName, stockStrengthPct, depthOfShadePct };
-    }
-    const { colorName, amountPer100g, unit, dropsPerMl, colorants } = line;
-    return {
-      kind: 'foodColor',
-      colorName,
-      amountPer100g,
-      unit,
-      ...(dropsPerMl !== undefined ? { dropsPerMl } : {}),
-      ...(colorants?.length ? { colorants: colorants as ColorantId[] } : {}),
-    };
-  });
-  return {
-    weightOfGoodsG: row.weightOfGoodsG,
-    liquorRatio: row.liquorRatio,
-    acid: row.acid,
-    lines,
-  };
-}
 
 /** dye-kit names recipe fields `lines[2].x`; the API calls them `recipeLines.2.x`. */
 function checkRecipe(recipe: Recipe): void {
@@ -213,7 +185,7 @@ export async function computeAmounts(
     row.baseId ? findBase(db, row.studioId, row.baseId) : undefined,
     row.potId ? findPot(db, row.studioId, row.potId) : undefined,
   ]);
-  const recipe = recipeOf(row);
+  const recipe = toDyeKitRecipe(row, row.recipeLines);
   const potCapacityMl = options.potCapacityMl ?? pot?.capacityMl;
   const scaleTarget: ScaleTarget = {
     ...target,
@@ -276,7 +248,7 @@ export async function createColorway(
   }
   const recipeLines = await resolveLines(db, studioId, input.recipeLines);
   const values = { ...input, studioId, weightOfGoodsG, recipeLines };
-  checkRecipe(recipeOf(values));
+  checkRecipe(toDyeKitRecipe(values, values.recipeLines));
   const [row] = await db.insert(colorways).values(values).returning();
   return toSummary(row!);
 }
@@ -292,7 +264,7 @@ export async function updateColorway(
   const { recipeLines: lineInput, ...rest } = patch;
   const recipeLines = lineInput ? await resolveLines(db, studioId, lineInput) : undefined;
   const next = { ...current, ...rest, ...(recipeLines ? { recipeLines } : {}) };
-  checkRecipe(recipeOf(next));
+  checkRecipe(toDyeKitRecipe(next, next.recipeLines));
   const row = await db.transaction(async (tx) => {
     const [updated] = await tx
       .update(colorways)
