@@ -6,6 +6,8 @@ source "$(dirname "${BASH_SOURCE[0]}")/env.sh"
 started=$(date +%s)
 bash "$VATSIDE_ROOT/infra-local/bootstrap.sh"
 [ -x /usr/bin/chromium ] || apt_install chromium
+# The scale-out test starts its own Redis; only the binary is needed.
+command -v redis-server >/dev/null 2>&1 || apt_install redis-server
 source "$VATSIDE_ROOT/infra-local/services.sh"
 trap 'stop_services' EXIT
 trap 'exit 130' INT TERM
