@@ -5,12 +5,15 @@ import { toNodeHandler } from 'better-auth/node';
 import { attachSession } from './auth/authorize.ts';
 import type { AppDeps } from './deps.ts';
 import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
+import { sameOriginOnly } from './http/origin-check.ts';
 import { accountRouter } from './routes/account.ts';
 import { dyeAlongsRouter } from './routes/dye-alongs.ts';
+import { dyeLogRouter } from './routes/dye-log.ts';
 import { healthRouter } from './routes/health.ts';
 import { liveRouter } from './routes/live.ts';
 import { mailUnsubscribeRouter } from './routes/mail-unsubscribe.ts';
 import { membersRouter } from './routes/members.ts';
+import { questionsRouter } from './routes/questions.ts';
 import { studiosRouter } from './routes/studios.ts';
 import { workbenchBasesRouter } from './routes/workbench-bases.ts';
 import { workbenchColorwaysRouter } from './routes/workbench-colorways.ts';
@@ -31,6 +34,8 @@ export const apiRouters = [
   dyeAlongsRouter,
   mailUnsubscribeRouter,
   liveRouter,
+  dyeLogRouter,
+  questionsRouter,
 ];
 
 /** better-auth answers everything under this path itself (sign-up, sign-in, verify, reset, delete). */
@@ -63,6 +68,7 @@ export function createApp(deps: AppDeps): Express {
   app.all(`${authBasePath}/{*rest}`, toNodeHandler(deps.auth));
   app.use(
     '/api',
+    sameOriginOnly(config.PUBLIC_ORIGIN),
     express.json({ limit: `${config.JSON_BODY_LIMIT_KB}kb` }),
     attachSession(deps.auth),
   );

@@ -55,6 +55,17 @@ describe('bad input gets the one error shape and writes nothing', () => {
     expect(Object.keys(body.error.fields ?? {})).toEqual(['limit']);
   });
 
+  it('a state-changing request from another site → 403, nothing written', async () => {
+    const before = await studioCount();
+    const res = await fetch(`${server.url}/api/studios`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', origin: 'http://elsewhere.example' },
+      body: JSON.stringify({ name: 'Cross Site', slug: 'cross-site', accentHex: '#000000' }),
+    });
+    await expectError(res, 403, 'FORBIDDEN');
+    expect(await studioCount()).toBe(before);
+  });
+
   it('an unknown API route → 404 NOT_FOUND', async () => {
     await expectError(await fetch(`${server.url}/api/skeins-of-the-moon`), 404, 'NOT_FOUND');
   });
