@@ -26,12 +26,15 @@ export function launchBrowser(): Promise<Browser> {
 export async function newContext(
   browser: Browser,
   viewport: keyof typeof viewports,
+  /** The device's clock, e.g. "Asia/Tokyo"; the host machine's zone when left out. */
+  timezoneId?: string,
 ): Promise<BrowserContext> {
   return browser.newContext({
     viewport: viewports[viewport],
     isMobile: viewport === 'phone',
     hasTouch: viewport === 'phone',
     deviceScaleFactor: viewport === 'phone' ? 2 : 1,
+    ...(timezoneId ? { timezoneId } : {}),
   });
 }
 

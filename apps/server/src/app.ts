@@ -8,13 +8,17 @@ import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
 import { sameOriginOnly } from './http/origin-check.ts';
 import { accountRouter } from './routes/account.ts';
 import { dyeAlongsRouter } from './routes/dye-alongs.ts';
+import { galleryRouter } from './routes/gallery.ts';
 import { dyeLogRouter } from './routes/dye-log.ts';
 import { healthRouter } from './routes/health.ts';
 import { liveRouter } from './routes/live.ts';
 import { mailUnsubscribeRouter } from './routes/mail-unsubscribe.ts';
 import { membersRouter } from './routes/members.ts';
+import { reviewMailUnsubscribeRouter } from './routes/review-mail-unsubscribe.ts';
+import { reviewRouter } from './routes/review.ts';
 import { questionsRouter } from './routes/questions.ts';
 import { studiosRouter } from './routes/studios.ts';
+import { submissionsRouter } from './routes/submissions.ts';
 import { workbenchBasesRouter } from './routes/workbench-bases.ts';
 import { workbenchColorwaysRouter } from './routes/workbench-colorways.ts';
 import { workbenchImagesRouter } from './routes/workbench-images.ts';
@@ -36,6 +40,10 @@ export const apiRouters = [
   liveRouter,
   dyeLogRouter,
   questionsRouter,
+  submissionsRouter,
+  reviewRouter,
+  galleryRouter,
+  reviewMailUnsubscribeRouter,
 ];
 
 /** better-auth answers everything under this path itself (sign-up, sign-in, verify, reset, delete). */

@@ -49,6 +49,12 @@ const configSchema = z.object({
   /** First retry after a failed send, ms; doubles per attempt. */
   MAIL_RETRY_BASE_MS: z.coerce.number().int().min(1).max(86_400_000).default(60_000),
   MAIL_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(50).default(8),
+  /** Redis for the Socket.IO adapter when several server processes share the load; empty: one process. */
+  REDIS_URL: z.string().default(''),
+  /** A viewer waits this long between two questions, seconds. */
+  QUESTION_MIN_INTERVAL_S: z.coerce.number().int().min(0).max(3_600).default(20),
+  /** Questions one person may ask in one session. */
+  QUESTIONS_PER_SESSION: z.coerce.number().int().min(1).max(1_000).default(10),
   /** Folder with the built apps (apps/<name>/dist); empty serves the API alone. */
   APPS_DIR: z.string().default(''),
 });

@@ -8,6 +8,7 @@ import { startMailWorker, type MailWorker } from './jobs/mail-worker.ts';
 import { createLogger } from './logger.ts';
 import { createMailer } from './mail/mailer.ts';
 import { createNotifier } from './realtime/notifier.ts';
+import { attachRedisAdapter } from './realtime/redis-adapter.ts';
 import { createRealtime, type RealtimeServer } from './realtime/socket-server.ts';
 import { createObjectStore } from './storage/object-store.ts';
 
@@ -37,10 +38,14 @@ export async function startServer(config: Config): Promise<RunningServer> {
   };
   const httpServer = createServer(createApp(deps));
   const io = createRealtime(httpServer, deps);
+  // Several processes share rooms through Redis; one process needs nothing.
+  const redis = config.REDIS_URL ? await attachRedisAdapter(io, config.REDIS_URL, logger) : null;
   deps.notifier.attach(io);
   await new Promise<void>((resolve, reject) => {
     httpServer.once('error', reject);
-    httpServer.listen(config.PORT, config.HOST, resolve);
+    // A live's phones all reconnect at once after a blip: a deep accept queue keeps the kernel
+    // from dropping their connections (Node's default is 511; the kernel caps it at somaxconn).
+    httpServer.listen({ port: config.PORT, host: config.HOST, backlog: 8192 }, resolve);
   });
   const mailWorker = config.MAIL_WORKER_ENABLED
     ? startMailWorker(deps, {
@@ -62,6 +67,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
       // The mail in hand is finished and recorded before the database goes away.
       await mailWorker?.stop();
       await io.close(); // also closes the HTTP server
+      await redis?.close();
       deps.objectStore.close();
       deps.mailer.close();
       await deps.database.close();

@@ -68,3 +68,5 @@ export const studioInvitations = pgTable(
   (t) => [index('studio_invitations_studio_idx').on(t.studioId)],
 );
 export * from './live-schema.ts';
+export * from './sharing-schema.ts';
+export * from './live-log-schema.ts';

@@ -19,3 +19,4 @@ export {
   or,
   sql,
 } from 'drizzle-orm';
+export type { SQL } from 'drizzle-orm';

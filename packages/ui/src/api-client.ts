@@ -66,18 +66,27 @@ async function request<T>(
 
   const body: unknown = await response.json().catch(() => undefined);
   if (!response.ok && !acceptStatus?.includes(response.status)) {
-    const parsed = errorBodySchema.safeParse(body);
-    if (parsed.success) {
-      const { code, message, fields } = parsed.data.error;
-      throw new ApiError(code, message, response.status, fields);
-    }
-    throw new ApiError(`HTTP_${response.status}`, 'The server had a problem.', response.status);
+    throw apiErrorFrom(response.status, body);
   }
+  return parseAnswer(body, response.status, schema);
+}
 
+/** The ApiError for a failed answer: the server's own error shape, else a generic one. */
+export function apiErrorFrom(status: number, body: unknown): ApiError {
+  const parsed = errorBodySchema.safeParse(body);
+  if (parsed.success) {
+    const { code, message, fields } = parsed.data.error;
+    return new ApiError(code, message, status, fields);
+  }
+  return new ApiError(`HTTP_${status}`, 'The server had a problem.', status);
+}
+
+/** A successful answer checked against its contract. */
+export function parseAnswer<T>(body: unknown, status: number, schema?: Parser<T>): T {
   if (!schema) return undefined as T;
   try {
     return schema.parse(body);
   } catch {
-    throw new ApiError('BAD_RESPONSE', 'The server sent something unexpected.', response.status);
+    throw new ApiError('BAD_RESPONSE', 'The server sent something unexpected.', status);
   }
 }

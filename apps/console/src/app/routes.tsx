@@ -27,6 +27,19 @@ export const routes: RouteObject[] = [
             children: [
               { index: true, element: <Navigate to="members" replace /> },
               { path: 'members', lazy: () => import('./routes/studio-members.tsx') },
+              { path: 'shelf', lazy: () => import('./routes/studio-shelf.tsx') },
+              { path: 'bases', lazy: () => import('./routes/studio-bases.tsx') },
+              { path: 'colorways', lazy: () => import('./routes/studio-colorways.tsx') },
+              { path: 'colorways/:colorwayId', lazy: () => import('./routes/studio-colorway.tsx') },
+              { path: 'calculators', lazy: () => import('./routes/studio-calculators.tsx') },
+              { path: 'inspiration', lazy: () => import('./routes/studio-inspiration.tsx') },
+              { path: 'live', lazy: () => import('./routes/studio-stovetop.tsx') },
+              { path: 'dye-alongs', lazy: () => import('./routes/studio-dye-alongs.tsx') },
+              { path: 'dye-alongs/new', lazy: () => import('./routes/studio-dye-along-new.tsx') },
+              {
+                path: 'dye-alongs/:dyeAlongId',
+                lazy: () => import('./routes/studio-dye-along.tsx'),
+              },
             ],
           },
           { path: 'join/:token', lazy: () => import('./routes/join.tsx') },
@@ -34,5 +47,19 @@ export const routes: RouteObject[] = [
         ],
       },
     ],
+  },
+  {
+    // A sheet to print: no console shell around it, only its own toolbar.
+    path: '/studios/:slug/dye-alongs/:dyeAlongId/recipe-card/:colorwayId',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Opening the recipe card…" />,
+    lazy: () => import('./routes/dye-along-recipe-card.tsx'),
+  },
+  {
+    // The pot board runs full width, without the console's header: the pots need the room.
+    path: '/studios/:slug/live/:sessionId',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Setting out the pots…" />,
+    lazy: () => import('./routes/live-board.tsx'),
   },
 ];

@@ -1,6 +1,6 @@
 import { AccountBadge } from '@vatside/ui/account/AccountBadge';
 import { useSignOut } from '@vatside/ui/account/use-sign-out.ts';
-import { useMe } from '@vatside/ui/session.ts';
+import { standingIn, useMe } from '@vatside/ui/session.ts';
 import { NavLink, Outlet, useParams } from 'react-router-dom';
 import { StudioSwitcher } from '../features/studios/components/StudioSwitcher.tsx';
 
@@ -40,6 +40,11 @@ export function AppShell() {
             {slug ? (
               <NavLink to={`/studios/${slug}/members`} className={navLinkClass}>
                 Members
+              </NavLink>
+            ) : null}
+            {slug && standingIn(me, slug) === 'host' ? (
+              <NavLink to={`/studios/${slug}/live`} className={navLinkClass}>
+                Stovetop
               </NavLink>
             ) : null}
           </nav>

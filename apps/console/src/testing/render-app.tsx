@@ -23,3 +23,6 @@ export function renderApp(path = '/') {
   );
   return { user, router };
 }
+
+/** For the first find after renderApp: a lazy route chunk can take a while on a busy machine. */
+export const firstRender = { timeout: 10_000 };

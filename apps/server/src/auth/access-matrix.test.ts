@@ -221,8 +221,109 @@ function liveRoutes(): Record<string, RouteCase> {
   };
 }
 
+/** The dye log and the questions (issue 8): helpers read the log; anyone reads the queue as their role may. */
+function liveLogRoutes(): Record<string, RouteCase> {
+  return {
+    'GET /api/live-sessions/:sessionId/dye-log': {
+      expect: staff,
+      path: () => `/api/live-sessions/${live.liveSessionId}/dye-log`,
+    },
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/dye-log': {
+      expect: staff,
+      path: (c) => `/api/studios/${c.slug}/dye-alongs/${live.dyeAlongId}/dye-log`,
+    },
+    'GET /api/live-sessions/:sessionId/questions': {
+      expect: everyone,
+      path: () => `/api/live-sessions/${live.liveSessionId}/questions?sort=meToo`,
+    },
+  };
+}
+
+/**
+ * Sharing, review, gallery and recap (issues 9 and 10): members share and manage only their own
+ * skeins; helpers and the host review; visitors read the public gallery and approved photos.
+ */
+function sharingRoutes(): Record<string, RouteCase> {
+  const at = (c: Cast, rest: string) => `/api/studios/${c.slug}${rest}`;
+  const id = () => randomUUID();
+  const sharers: Row = { ...everyone, visitor: 401, otherHost: 403 };
+  const mine = (rest: () => string, body?: () => unknown): RouteCase => ({
+    expect: sharers,
+    path: (c) => at(c, `/my-submissions${rest()}`),
+    ...(body ? { body } : {}),
+  });
+  const review = (rest: () => string, body?: () => unknown): RouteCase => ({
+    expect: staff,
+    path: (c) => at(c, `/review${rest()}`),
+    ...(body ? { body } : {}),
+  });
+  const badToken = 'bm90LWEtdG9rZW4.bm90LWEtc2lnbmF0dXJl';
+  return {
+    // JSON instead of photos: sharers get a 404 (no such dye-along), others are refused first.
+    'POST /api/studios/:slug/dye-alongs/:dyeAlongId/submissions': {
+      expect: sharers,
+      path: (c) => at(c, `/dye-alongs/${id()}/submissions`),
+      body: () => ({ baseName: 'Matrix' }),
+    },
+    'GET /api/studios/:slug/my-submissions': mine(() => ''),
+    'GET /api/studios/:slug/my-submissions/:submissionId': mine(() => `/${id()}`),
+    'PATCH /api/studios/:slug/my-submissions/:submissionId': mine(
+      () => `/${id()}`,
+      () => ({ notes: 'Matrix' }),
+    ),
+    'DELETE /api/studios/:slug/my-submissions/:submissionId': mine(() => `/${id()}`),
+    'PUT /api/studios/:slug/my-submissions/:submissionId/consent': mine(
+      () => `/${id()}/consent`,
+      () => ({ consentToFeature: false }),
+    ),
+    'GET /api/studios/:slug/submissions/:submissionId/photos/:photoId/web': {
+      expect: everyone,
+      path: (c) => at(c, `/submissions/${id()}/photos/${id()}/web`),
+    },
+    'GET /api/studios/:slug/submissions/:submissionId/photos/:photoId/thumb': {
+      expect: everyone,
+      path: (c) => at(c, `/submissions/${id()}/photos/${id()}/thumb`),
+    },
+    'GET /api/studios/:slug/review/submissions': review(() => '/submissions'),
+    'GET /api/studios/:slug/review/submissions/:submissionId': review(() => `/submissions/${id()}`),
+    'POST /api/studios/:slug/review/submissions/:submissionId/decisions': review(
+      () => `/submissions/${id()}/decisions`,
+      () => ({ decision: 'approve' }),
+    ),
+    'POST /api/studios/:slug/review/decisions': review(
+      () => '/decisions',
+      () => ({ submissionIds: [id()], decision: 'approve' }),
+    ),
+    'GET /api/studios/:slug/review/audit': review(() => '/audit'),
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/gallery': {
+      expect: everyone,
+      path: (c) => at(c, `/dye-alongs/${live.dyeAlongId}/gallery`),
+    },
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/recap': {
+      expect: staff,
+      path: (c) => at(c, `/dye-alongs/${live.dyeAlongId}/recap`),
+    },
+    'PUT /api/studios/:slug/dye-alongs/:dyeAlongId/recap': {
+      expect: hostOnly,
+      path: (c) => at(c, `/dye-alongs/${live.dyeAlongId}/recap`),
+      body: () => ({ items: [] }),
+    },
+    // No sign-in: the signed token is the permission (a forged one is a 400).
+    'GET /api/mail/review-unsubscribe': {
+      expect: everyone,
+      path: () => `/api/mail/review-unsubscribe?token=${badToken}`,
+    },
+    'POST /api/mail/review-unsubscribe': {
+      expect: everyone,
+      path: () => `/api/mail/review-unsubscribe?token=${badToken}`,
+    },
+  };
+}
+
 /** Every API route: a route missing here (or listed but gone) fails the first test. */
 const routes: Record<string, RouteCase> = {
+  // First: sharing needs the viewer still a member ('DELETE …/follow' below ends that).
+  ...sharingRoutes(),
   'GET /api/health': { expect: everyone, path: () => '/api/health' },
   'GET /api/me': { expect: everyone, path: () => '/api/me' },
   'PATCH /api/me/profile': {
@@ -284,6 +385,7 @@ const routes: Record<string, RouteCase> = {
   ...workbenchRoutes(),
   ...dyeAlongRoutes(),
   ...liveRoutes(),
+  ...liveLogRoutes(),
 };
 
 type SocketExpect = 'ok' | 'UNAUTHENTICATED' | 'FORBIDDEN' | 'NOT_FOUND';
@@ -294,6 +396,13 @@ const all = (e: SocketExpect): Record<PersonaName, SocketExpect> => ({
   host: e,
   otherHost: e,
 });
+
+/** Refusals for someone without a role here: a visitor, a viewer, another studio's host. */
+const memberRefusals = {
+  visitor: 'UNAUTHENTICATED',
+  viewer: 'FORBIDDEN',
+  otherHost: 'FORBIDDEN',
+} as const;
 
 interface SocketCase {
   event: (typeof clientEventNames)[number];
@@ -364,6 +473,84 @@ const socketCases: SocketCase[] = [
       action: { type: 'note:push', text: 'Matrix note' },
     }),
   },
+  {
+    event: 'dyeLog:record',
+    label: 'dyeLog:record on a live session',
+    expect: { ...memberRefusals, moderator: 'FORBIDDEN', host: 'ok' },
+    payload: () => ({
+      sessionId: live.liveSessionId,
+      potId: live.potId,
+      recipeLineId: live.recipeLineId,
+      amount: 5,
+    }),
+  },
+  {
+    event: 'dyeLog:record',
+    label: 'dyeLog:record on a rehearsal',
+    expect: { ...all('NOT_FOUND'), host: 'ok' },
+    payload: () => ({
+      sessionId: live.rehearsalId,
+      potId: live.potId,
+      recipeLineId: live.recipeLineId,
+    }),
+  },
+  {
+    // An entry that names nothing: the role check answers first, the host then gets a 404.
+    event: 'dyeLog:correct',
+    label: 'dyeLog:correct',
+    expect: { ...memberRefusals, moderator: 'FORBIDDEN', host: 'NOT_FOUND' },
+    payload: () => ({
+      sessionId: live.liveSessionId,
+      entryId: randomUUID(),
+      amount: 1,
+      reason: 'Matrix',
+    }),
+  },
+  {
+    event: 'questions:join',
+    label: 'questions:join a live session',
+    expect: all('ok'),
+    payload: () => ({ sessionId: live.liveSessionId }),
+  },
+  {
+    event: 'questions:join',
+    label: 'questions:join a rehearsal',
+    expect: { ...all('NOT_FOUND'), host: 'ok' },
+    payload: () => ({ sessionId: live.rehearsalId }),
+  },
+  {
+    event: 'questions:ask',
+    label: 'questions:ask',
+    expect: { ...all('ok'), visitor: 'UNAUTHENTICATED' },
+    payload: () => ({ sessionId: live.liveSessionId, text: 'Matrix question?' }),
+  },
+  {
+    event: 'questions:ask',
+    label: 'questions:ask in a rehearsal',
+    expect: { ...all('NOT_FOUND'), host: 'ok' },
+    payload: () => ({ sessionId: live.rehearsalId, text: 'Practice question?' }),
+  },
+  {
+    event: 'questions:meToo',
+    label: 'questions:meToo',
+    expect: { ...all('NOT_FOUND'), visitor: 'UNAUTHENTICATED' },
+    payload: () => ({ sessionId: live.liveSessionId, questionId: randomUUID() }),
+  },
+  ...(['questions:answer', 'questions:hide', 'questions:mute'] as const).map(
+    (event): SocketCase => ({
+      // A question that names nothing: helpers and the host pass the role check, then get a 404.
+      event,
+      label: event,
+      expect: { ...memberRefusals, moderator: 'NOT_FOUND', host: 'NOT_FOUND' },
+      payload: () => ({
+        sessionId: live.liveSessionId,
+        questionId: randomUUID(),
+        answer: 'Matrix',
+        hidden: true,
+        muted: true,
+      }),
+    }),
+  ),
   {
     event: 'live:leave',
     label: 'live:leave',

@@ -19,6 +19,17 @@ export const studioPolicy = {
   'dyeAlong:edit': ['host'],
   // Only the host starts a live session or a rehearsal and drives the pots.
   'live:run': ['host'],
+  // The dye log is the host's record; helpers read it. Helpers and the host run the questions.
+  'live:log': ['host'],
+  'live:logRead': ['moderator', 'host'],
+  'live:moderate': ['moderator', 'host'],
+  // Sharing: members share skeins and manage only their own; visitors see the public gallery.
+  'submission:share': ['viewer', 'moderator', 'host'],
+  // Review: helpers and the host work the queue and read the audit.
+  'review:work': ['moderator', 'host'],
+  // The recap running order: helpers read it, the host builds it.
+  'recap:read': ['moderator', 'host'],
+  'recap:edit': ['host'],
 } as const satisfies Record<string, readonly StudioStanding[]>;
 
 export type StudioAction = keyof typeof studioPolicy;

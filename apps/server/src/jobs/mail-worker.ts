@@ -7,6 +7,7 @@ import { dyeAlongMail } from '../mail/dye-along-mails.ts';
 import { unsubscribeToken } from '../mail/unsubscribe-token.ts';
 import { publicDyeAlong } from '../services/dye-along-view.ts';
 import { REMINDER_LEAD_MS, type Tx } from './dye-along-mail-queue.ts';
+import { processOneReviewMail } from './review-mail-delivery.ts';
 
 // The mail job: works through the outbox table in PostgreSQL. Each row is claimed with
 // SELECT … FOR UPDATE SKIP LOCKED inside a transaction that stays open while the mail is handed
@@ -175,6 +176,23 @@ export function startMailWorker(deps: AppDeps, options: MailWorkerOptions): Mail
     });
   }
 
+  const reviewOptions = {
+    maxAttempts: options.maxAttempts,
+    retryDelayMs: (attempts: number) => retryDelayMs(attempts, options.retryBaseMs),
+  };
+
+  /** The sharers' review mails: their own outbox, handled by the same rules after each pass. */
+  async function runReviewMails(): Promise<number> {
+    let handled = 0;
+    while (
+      !stopped &&
+      handled < options.batchSize &&
+      (await processOneReviewMail(deps, reviewOptions))
+    )
+      handled++;
+    return handled;
+  }
+
   async function runOnce(): Promise<number> {
     let handled = 0;
     while (!stopped && handled < options.batchSize && (await processOne())) handled++;
@@ -185,7 +203,7 @@ export function startMailWorker(deps: AppDeps, options: MailWorkerOptions): Mail
     while (!stopped && options.autoStart !== false) {
       let handled = 0;
       try {
-        handled = await runOnce();
+        handled = Math.max(await runOnce(), await runReviewMails());
       } catch (error) {
         deps.logger.error({ err: error }, 'mail worker pass failed');
       }

@@ -6,9 +6,12 @@ import type { Database } from '@vatside/db/client';
 import { studioStanding } from '../auth/authorize.ts';
 import { HttpError } from '../http/errors.ts';
 import type { RealtimeServer, RealtimeSocket } from '../realtime/socket-server.ts';
-import { applyLiveAction, liveSessionRow, sessionState } from './sessions.ts';
+import { applyLiveAction, liveSessionRow, sessionState, type LiveSessionRow } from './sessions.ts';
 
-const hostRoom = (sessionId: string) => `live:${sessionId}:host`;
+/** The host's viewer count waits this long for more joins or leaves before it is counted. */
+const viewerCountSettleMs = 500;
+
+export const hostRoom = (sessionId: string) => `live:${sessionId}:host`;
 const viewerRoom = (sessionId: string) => `live:${sessionId}:viewers`;
 
 const refuse = (code: RealtimeError['error']['code'], message: string): RealtimeError => ({
@@ -35,9 +38,53 @@ function viewerView(state: LiveState, streamDelayMs = state.streamDelayMs): Live
 /**
  * The live session over Socket.IO. State lives in PostgreSQL (see sessions.ts); this keeps a
  * few seconds of history per session so a viewer who joins sees what the video shows.
+ * That history is per process: with several processes (the Redis adapter), a viewer who joins
+ * through a process that did not apply the recent actions gets the current state at once rather
+ * than the delayed one, until the next action; the delayed broadcasts themselves reach everyone.
  */
 export function createLiveHub(io: RealtimeServer, db: Database) {
   const history = new Map<string, { atMs: number; state: LiveState }[]>();
+  // A studio and a mode never change for a session, so joins look them up once per process.
+  const sessionFacts = new Map<
+    string,
+    Promise<{ studioId: string; mode: LiveSessionRow['mode'] }>
+  >();
+  // Joins share reads of the current state: one read at a time per session, and each read serves
+  // every join that entered the room before it began, so 5,000 phones reconnecting at once cost
+  // a handful of queries and never get a snapshot older than their place in the room.
+  const queuedReads = new Map<string, Promise<LiveState>>();
+  const runningReads = new Map<string, Promise<LiveState>>();
+  const countTimers = new Map<string, NodeJS.Timeout>();
+
+  function factsOf(sessionId: string) {
+    let facts = sessionFacts.get(sessionId);
+    if (!facts) {
+      facts = liveSessionRow(db, sessionId).then((row) => ({
+        studioId: row.studioId,
+        mode: row.mode,
+      }));
+      sessionFacts.set(sessionId, facts);
+      facts.catch(() => sessionFacts.delete(sessionId));
+    }
+    return facts;
+  }
+
+  function currentState(sessionId: string): Promise<LiveState> {
+    const queued = queuedReads.get(sessionId);
+    if (queued) return queued;
+    const previous = runningReads.get(sessionId)?.catch(() => undefined);
+    const read = Promise.resolve(previous).then(() => {
+      queuedReads.delete(sessionId); // joins from now on wait for the next read
+      return liveSessionRow(db, sessionId).then(sessionState);
+    });
+    queuedReads.set(sessionId, read);
+    runningReads.set(sessionId, read);
+    const done = () => {
+      if (runningReads.get(sessionId) === read) runningReads.delete(sessionId);
+    };
+    read.then(done, done);
+    return read;
+  }
 
   function remember(state: LiveState, nowMs: number) {
     const kept = (history.get(state.sessionId) ?? []).filter(
@@ -65,9 +112,21 @@ export function createLiveHub(io: RealtimeServer, db: Database) {
     else send();
   }
 
-  async function announceViewerCount(sessionId: string) {
-    const count = (await io.in(viewerRoom(sessionId)).fetchSockets()).length;
-    io.to(hostRoom(sessionId)).emit('live:viewers', { sessionId, count });
+  /** Counts once the joins and leaves settle: a crowd arriving costs one count, not one each. */
+  function announceViewerCount(sessionId: string) {
+    if (countTimers.has(sessionId)) return;
+    const timer = setTimeout(() => {
+      countTimers.delete(sessionId);
+      // fetchSockets asks every process through the adapter, so the count covers all of them.
+      io.in(viewerRoom(sessionId))
+        .fetchSockets()
+        .then((sockets) =>
+          io.to(hostRoom(sessionId)).emit('live:viewers', { sessionId, count: sockets.length }),
+        )
+        .catch(() => undefined); // a process that did not answer in time: the next count will
+    }, viewerCountSettleMs);
+    timer.unref();
+    countTimers.set(sessionId, timer);
   }
 
   async function isStudioHost(socket: RealtimeSocket, studioId: string) {
@@ -78,17 +137,22 @@ export function createLiveHub(io: RealtimeServer, db: Database) {
     const parsed = liveJoinSchema.safeParse(payload);
     if (!parsed.success) return refuse('VALIDATION_FAILED', 'Send the session id.');
     const { sessionId } = parsed.data;
-    const row = await liveSessionRow(db, sessionId).catch(asRefusal);
-    if ('error' in row) return row;
-    const isHost = await isStudioHost(socket, row.studioId);
+    const facts = await factsOf(sessionId).catch(asRefusal);
+    if ('error' in facts) return facts;
+    const isHost = await isStudioHost(socket, facts.studioId);
     // A rehearsal is private: to anyone but the host it does not exist.
-    if (row.mode === 'rehearsal' && !isHost)
+    if (facts.mode === 'rehearsal' && !isHost)
       return refuse('NOT_FOUND', 'That live session was not found.');
+    // Into the room first, then the state: any change after this read reaches the socket.
+    const room = isHost ? hostRoom(sessionId) : viewerRoom(sessionId);
+    await socket.join(room);
+    const state = await currentState(sessionId).catch(asRefusal);
+    if ('error' in state) {
+      await socket.leave(room); // a rehearsal that ended in the meantime
+      return state;
+    }
     const nowMs = Date.now();
-    const state = sessionState(row);
-    await socket.join(isHost ? hostRoom(sessionId) : viewerRoom(sessionId));
-    if (!isHost) void announceViewerCount(sessionId);
-    else void announceViewerCount(sessionId);
+    announceViewerCount(sessionId);
     return {
       state: isHost ? state : viewerSnapshot(state, nowMs),
       serverNowMs: nowMs,
@@ -101,7 +165,7 @@ export function createLiveHub(io: RealtimeServer, db: Database) {
     if (!parsed.success) return refuse('VALIDATION_FAILED', 'Send the session id.');
     await socket.leave(viewerRoom(parsed.data.sessionId));
     await socket.leave(hostRoom(parsed.data.sessionId));
-    void announceViewerCount(parsed.data.sessionId);
+    announceViewerCount(parsed.data.sessionId);
     return { ok: true as const };
   }
 
@@ -119,7 +183,14 @@ export function createLiveHub(io: RealtimeServer, db: Database) {
         : refuse('UNAUTHENTICATED', 'Sign in to do this.');
     }
     const nowMs = Date.now();
-    const state = await applyLiveAction(db, row.id, action.data, nowMs).catch(asRefusal);
+    const state = await applyLiveAction(
+      db,
+      row.id,
+      action.data,
+      nowMs,
+      parsed.data.baseRevision,
+      row,
+    ).catch(asRefusal);
     if ('error' in state) return state;
     broadcast(state, nowMs);
     return { state };
@@ -130,7 +201,7 @@ export function createLiveHub(io: RealtimeServer, db: Database) {
     const sessions = [...socket.rooms]
       .filter((r) => r.endsWith(':viewers'))
       .map((r) => r.split(':')[1] ?? '');
-    setImmediate(() => sessions.forEach((id) => void announceViewerCount(id)));
+    setImmediate(() => sessions.forEach(announceViewerCount));
   }
 
   return { join, leave, act, onDisconnecting };

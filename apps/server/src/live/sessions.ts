@@ -121,15 +121,25 @@ export async function runningLiveSession(db: Database, studioId: string) {
 /**
  * Applies a host action with optimistic concurrency: the write only lands on the revision it
  * was computed from, so two processes (or two taps) never apply one action twice or lose one.
+ * With `baseRevision` (what the host's screen showed), an action meant for an older state is
+ * refused instead of applied on top of the newer one.
  */
 export async function applyLiveAction(
   db: Database,
   sessionId: string,
   action: HostAction,
   nowMs = Date.now(),
+  baseRevision?: number,
+  /** The row the caller just read, saving the first attempt a round trip. */
+  freshRow?: LiveSessionRow,
 ): Promise<LiveState> {
   for (let attempt = 0; attempt < 5; attempt++) {
-    const row = await liveSessionRow(db, sessionId);
+    const row = attempt === 0 && freshRow ? freshRow : await liveSessionRow(db, sessionId);
+    if (baseRevision !== undefined && row.revision !== baseRevision) {
+      throw conflict(
+        'The session moved on since your screen last updated; check it and try again.',
+      );
+    }
     let next: LiveState;
     try {
       next = applyHostAction(sessionState(row), action, nowMs, () => randomUUID());

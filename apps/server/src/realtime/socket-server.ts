@@ -15,7 +15,9 @@ import { studios } from '@vatside/db/schema';
 import { studioStanding, type SessionUser } from '../auth/authorize.ts';
 import { can, type StudioAction } from '../auth/policy.ts';
 import type { AppDeps } from '../deps.ts';
+import { createDyeLogHub } from '../live/dye-log-hub.ts';
 import { createLiveHub } from '../live/live-hub.ts';
+import { createQuestionHub } from '../live/question-hub.ts';
 
 interface SocketData {
   user: SessionUser | null;
@@ -42,6 +44,14 @@ export const clientEventNames = [
   'live:join',
   'live:leave',
   'live:action',
+  'dyeLog:record',
+  'dyeLog:correct',
+  'questions:join',
+  'questions:ask',
+  'questions:meToo',
+  'questions:answer',
+  'questions:hide',
+  'questions:mute',
 ] as const satisfies readonly (keyof ClientToServerEvents)[];
 
 export const staffRoom = (studioId: string) => `studio:${studioId}:staff`;
@@ -62,9 +72,14 @@ export function createRealtime(
 
   // The handshake carries the same session cookie as the REST API; visitors connect too.
   io.use(async (socket, next) => {
-    const session = await auth.api
-      .getSession({ headers: fromNodeHeaders(socket.handshake.headers) })
-      .catch(() => null);
+    // Most phones at a live are visitors: without a session cookie there is nothing to look up,
+    // which keeps thousands of reconnects at once from queueing behind session lookups.
+    const hasSession = socket.handshake.headers.cookie?.includes('session_token') ?? false;
+    const session = hasSession
+      ? await auth.api
+          .getSession({ headers: fromNodeHeaders(socket.handshake.headers) })
+          .catch(() => null)
+      : null;
     socket.data.user = session?.user ?? null;
     next();
   });
@@ -100,6 +115,8 @@ export function createRealtime(
   }
 
   const live = createLiveHub(io, database.db);
+  const dyeLog = createDyeLogHub(io, database.db);
+  const questions = createQuestionHub(io, database.db, config);
 
   io.on('connection', (socket) => {
     socket.on(
@@ -115,6 +132,38 @@ export function createRealtime(
       handle(socket, (payload) => live.act(socket, payload)),
     );
     socket.on('disconnecting', () => live.onDisconnecting(socket));
+    socket.on(
+      'dyeLog:record',
+      handle(socket, (payload) => dyeLog.record(socket, payload)),
+    );
+    socket.on(
+      'dyeLog:correct',
+      handle(socket, (payload) => dyeLog.correct(socket, payload)),
+    );
+    socket.on(
+      'questions:join',
+      handle(socket, (payload) => questions.join(socket, payload)),
+    );
+    socket.on(
+      'questions:ask',
+      handle(socket, (payload) => questions.ask(socket, payload)),
+    );
+    socket.on(
+      'questions:meToo',
+      handle(socket, (payload) => questions.meToo(socket, payload)),
+    );
+    socket.on(
+      'questions:answer',
+      handle(socket, (payload) => questions.answer(socket, payload)),
+    );
+    socket.on(
+      'questions:hide',
+      handle(socket, (payload) => questions.hide(socket, payload)),
+    );
+    socket.on(
+      'questions:mute',
+      handle(socket, (payload) => questions.mute(socket, payload)),
+    );
 
     socket.emit('server:hello', { serverAtMs: Date.now(), signedIn: socket.data.user !== null });
 

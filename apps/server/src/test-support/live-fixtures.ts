@@ -6,11 +6,14 @@ export interface TestLive {
   liveSessionId: string;
   rehearsalId: string;
   potId: string;
+  /** The pot's one recipe line: the 1 % stock jar (500 mL made) at 1 % depth of shade. */
+  recipeLineId: string;
+  jarId: string;
 }
 
 /** An announced month starting in half an hour, with a running live session and a rehearsal. */
 export async function makeLiveSessions(host: TestClient, slug: string): Promise<TestLive> {
-  const { colorway } = await makeMonth(host, slug);
+  const { colorway, jar } = await makeMonth(host, slug);
   const dyeAlong = await makeDyeAlong(host, slug, {
     startsAt: new Date(Date.now() + 30 * 60_000).toISOString(),
     expectedLengthMin: 90,
@@ -28,5 +31,12 @@ export async function makeLiveSessions(host: TestClient, slug: string): Promise<
   };
   const rehearsalId = await start('rehearsal');
   const liveSessionId = await start('live');
-  return { dyeAlongId: dyeAlong.id, liveSessionId, rehearsalId, potId: colorway.id };
+  return {
+    dyeAlongId: dyeAlong.id,
+    liveSessionId,
+    rehearsalId,
+    potId: colorway.id,
+    recipeLineId: colorway.recipeLines[0]!.id,
+    jarId: jar.id,
+  };
 }

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import { availableParallelism } from 'node:os';
 import sharp, { type Sharp } from 'sharp';
 import { describeColor, extractPalette, hexToLab } from '@vatside/dye-kit';
 import type { StoredSwatch } from '@vatside/db/schema';
@@ -29,7 +30,29 @@ export interface ProcessedImage {
 
 export interface ProcessOptions {
   maxPixels: number;
+  /** Swatches of the whole image's palette; 0 skips it (a shared skein reads its yarn area). */
   swatchCount: number;
+}
+
+// Decoding a phone photo takes a core and tens of megabytes: at most one image per core is in
+// the pipeline, each on one libvips thread, and the rest wait their turn (first come, first
+// served). Twenty shares at once then finish one after another instead of all at the end, and
+// memory stays bounded.
+sharp.concurrency(1);
+const IMAGE_SLOTS = Math.max(1, availableParallelism());
+let busy = 0;
+const waiting: (() => void)[] = [];
+
+async function inTurn<T>(work: () => Promise<T>): Promise<T> {
+  if (busy >= IMAGE_SLOTS) await new Promise<void>((resolve) => waiting.push(resolve));
+  else busy++;
+  try {
+    return await work();
+  } finally {
+    const next = waiting.shift();
+    if (next) next();
+    else busy--;
+  }
 }
 
 const unreadable = () =>
@@ -67,7 +90,9 @@ async function render(input: Sharp, maxPx: number): Promise<Rendition> {
     .resize({ width: maxPx, height: maxPx, fit: 'inside', withoutEnlargement: true })
     .flatten({ background: '#ffffff' })
     .toColourspace('srgb')
-    .jpeg({ quality: 82, mozjpeg: true })
+    // Plain libjpeg with optimized Huffman tables: mozjpeg's trellis search cost more time per
+    // photo than the few percent of bytes it saved.
+    .jpeg({ quality: 82, optimiseCoding: true })
     .toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height, contentType: OUTPUT_TYPE };
 }
@@ -92,16 +117,25 @@ export async function processImage(
   const type = await sniffImageType(bytes);
   await refuseTooManyPixels(bytes, options.maxPixels);
   refuseTrailingData(bytes, type);
-  try {
-    // `failOn: 'error'` refuses damaged and truncated data; `rotate()` applies EXIF orientation.
-    const decoded = sharp(bytes, { limitInputPixels: options.maxPixels, failOn: 'error' }).rotate();
-    const web = await render(decoded, WEB_MAX_PX);
-    const thumb = await render(sharp(web.data), THUMB_MAX_PX);
-    return { web, thumb, palette: await paletteOf(web.data, options.swatchCount) };
-  } catch (error) {
-    if (error instanceof HttpError) throw error;
-    throw unreadable();
-  }
+  return inTurn(async () => {
+    try {
+      // `failOn: 'error'` refuses damaged and truncated data; `rotate()` applies EXIF orientation;
+      // resizing straight after lets libjpeg decode at a fraction of full size (shrink-on-load),
+      // and `sequentialRead` reads the input top to bottom once.
+      const decoded = sharp(bytes, {
+        limitInputPixels: options.maxPixels,
+        failOn: 'error',
+        sequentialRead: true,
+      }).rotate();
+      const web = await render(decoded, WEB_MAX_PX);
+      const thumb = await render(sharp(web.data), THUMB_MAX_PX);
+      const palette = options.swatchCount > 0 ? await paletteOf(web.data, options.swatchCount) : [];
+      return { web, thumb, palette };
+    } catch (error) {
+      if (error instanceof HttpError) throw error;
+      throw unreadable();
+    }
+  });
 }
 
 const hex2 = (n: number) => Math.round(n).toString(16).padStart(2, '0');

@@ -19,9 +19,22 @@ export const routes: RouteObject[] = [
           { index: true, lazy: () => import('./routes/welcome.tsx') },
           ...accountRoutes,
           { path: 's/:slug', lazy: () => import('./routes/studio-page.tsx') },
+          { path: 's/:slug/live', lazy: () => import('./routes/studio-live.tsx') },
+          {
+            path: 's/:slug/dye-alongs/:dyeAlongId',
+            lazy: () => import('./routes/studio-dye-along.tsx'),
+          },
+          { path: 'unsubscribe', lazy: () => import('./routes/unsubscribe.tsx') },
           { path: '*', lazy: () => import('./routes/not-found.tsx') },
         ],
       },
     ],
+  },
+  {
+    // The follow-along has its own full-width frame; socket.io-client loads only with it.
+    path: '/live/:sessionId',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Setting out the pots…" />,
+    lazy: () => import('./routes/live-follow.tsx'),
   },
 ];

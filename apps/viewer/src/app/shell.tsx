@@ -1,5 +1,6 @@
 import { NavLink, Outlet, useParams } from 'react-router-dom';
 import { AccountBadge } from '@vatside/ui/account/AccountBadge';
+import { DyeStripes } from '@vatside/ui/DyeStripes';
 import { SafetyNote } from '@vatside/ui/SafetyNote';
 
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
@@ -41,16 +42,5 @@ export function AppShell() {
         <SafetyNote />
       </footer>
     </div>
-  );
-}
-
-/** Three dip-dyed bands: madder, marigold and vat. Our mark beside the wordmark. */
-function DyeStripes() {
-  return (
-    <span aria-hidden="true" className="flex h-9 w-3 flex-col overflow-hidden rounded-full">
-      <span className="flex-1 bg-madder-600" />
-      <span className="flex-1 bg-marigold-500" />
-      <span className="flex-1 bg-vat-200" />
-    </span>
   );
 }

@@ -10,6 +10,12 @@ const signedOut = () => HttpResponse.json(null);
 export const server = setupServer(
   http.get('/api/me', signedOut),
   http.get('/api/studios', () => HttpResponse.json(studioList)),
+  // Most days nothing is on the stove.
+  http.get('/api/studios/:slug/live', () => HttpResponse.json({ live: null })),
+  // …and no dye-along is announced.
+  http.get('/api/studios/:slug/dye-alongs', () =>
+    HttpResponse.json({ items: [], page: { limit: 5, offset: 0, total: 0 } }),
+  ),
 );
 
 /** From now on, /api/me answers as this person. */

@@ -1,11 +1,13 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterAll, afterEach } from 'vitest';
 import { server } from './server.ts';
 
 // Listen before the test file imports the app: better-auth's client keeps the `fetch` it
 // finds when it is created, and that must be the one msw intercepts.
 server.listen({ onUnhandledRequest: 'error' });
+// Lazy route modules are transformed on first use; on a busy machine that can pass a second.
+configure({ asyncUtilTimeout: 3_000 });
 afterEach(() => {
   cleanup();
   server.resetHandlers();

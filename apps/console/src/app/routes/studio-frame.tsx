@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { RequireSignIn } from '@vatside/ui/account/RequireSignIn';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
-import { Outlet, useParams } from 'react-router-dom';
+import { NavLink, Outlet, useParams } from 'react-router-dom';
 import { studioQueryOptions } from '../../features/studios/api.ts';
 
 /** Every /studios/:slug screen: signed in, and a host or moderator of that studio. */
@@ -65,7 +65,41 @@ function StudioGate({ slug }: { slug: string }) {
           {studio.tagline ? <p className="text-lg text-vat-800">{studio.tagline}</p> : null}
         </div>
       </div>
+      <WorkbenchNav />
       <Outlet />
     </div>
+  );
+}
+
+const workbenchSections = [
+  { to: 'shelf', label: 'Dye shelf' },
+  { to: 'bases', label: 'Bases & pots' },
+  { to: 'colorways', label: 'Colorways' },
+  { to: 'calculators', label: 'Calculators' },
+  { to: 'inspiration', label: 'Inspiration' },
+  { to: 'dye-alongs', label: 'Dye-alongs' },
+] as const;
+
+/** The planning screens of the studio, one tap apart. */
+function WorkbenchNav() {
+  return (
+    <nav aria-label="Workbench" className="flex flex-wrap gap-2">
+      {workbenchSections.map((section) => (
+        <NavLink
+          key={section.to}
+          to={section.to}
+          className={({ isActive }) =>
+            [
+              'inline-flex min-h-12 shrink-0 items-center rounded-xl border-2 px-4 font-bold whitespace-nowrap',
+              isActive
+                ? 'border-vat-800 bg-vat-800 text-wool-50'
+                : 'border-vat-800 bg-wool-50 text-vat-900 hover:bg-vat-100',
+            ].join(' ')
+          }
+        >
+          {section.label}
+        </NavLink>
+      ))}
+    </nav>
   );
 }

@@ -3,6 +3,8 @@ import { ApiError } from '@vatside/ui/api-client.ts';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { useParams } from 'react-router-dom';
+import { NextDyeAlongLink } from '../../features/dye-alongs/components/NextDyeAlongLink.tsx';
+import { LiveNowLink } from '../../features/live/components/LiveNowLink.tsx';
 import { studioQueryOptions } from '../../features/studios/api.ts';
 import { FollowPanel } from '../../features/studios/components/FollowPanel.tsx';
 import { StudioProfile } from '../../features/studios/components/StudioProfile.tsx';
@@ -36,6 +38,8 @@ export function Component() {
   return (
     <div className="space-y-6">
       <StudioProfile studio={studio} />
+      <LiveNowLink slug={studio.slug} />
+      <NextDyeAlongLink slug={studio.slug} />
       <FollowPanel studio={studio} />
     </div>
   );

@@ -1,0 +1,97 @@
+import {
+  closestCenter,
+  DndContext,
+  KeyboardSensor,
+  PointerSensor,
+  useSensor,
+  useSensors,
+  type DragEndEvent,
+} from '@dnd-kit/core';
+import {
+  arrayMove,
+  SortableContext,
+  sortableKeyboardCoordinates,
+  verticalListSortingStrategy,
+} from '@dnd-kit/sortable';
+import type { Step } from '@vatside/contracts/workbench-colorways';
+import { FormAlert } from '@vatside/ui/form/FormAlert';
+import { useDeleteStep, useReorderSteps } from '../api.ts';
+import { StepItem } from './StepItem.tsx';
+
+/** A recipe line the host can point a step at, with its computed amount in words. */
+export type LineChoice = { id: string; name: string; amount: string };
+
+/** The ordered steps: drag by the handle, or use the move buttons (keyboard and wet thumbs). */
+export function RunSheet({
+  slug,
+  colorwayId,
+  steps,
+  lines,
+  canEdit,
+}: {
+  slug: string;
+  colorwayId: string;
+  steps: Step[];
+  lines: LineChoice[];
+  canEdit: boolean;
+}) {
+  const reorder = useReorderSteps(slug, colorwayId);
+  const remove = useDeleteStep(slug, colorwayId);
+  const sensors = useSensors(
+    useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
+    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
+  );
+  const ids = steps.map((s) => s.id);
+
+  const move = (from: number, to: number) => {
+    if (to < 0 || to >= ids.length || from === to) return;
+    reorder.mutate(arrayMove(ids, from, to));
+  };
+  const onDragEnd = ({ active, over }: DragEndEvent) => {
+    if (over) move(ids.indexOf(String(active.id)), ids.indexOf(String(over.id)));
+  };
+
+  if (steps.length === 0) {
+    return (
+      <p className="text-lg">
+        No steps yet. Write the first one below: soak, heat, add dye, add acid, hold, cool.
+      </p>
+    );
+  }
+  return (
+    <div className="space-y-3">
+      {reorder.error ? (
+        <FormAlert>The new order was not saved: {reorder.error.message}</FormAlert>
+      ) : null}
+      {remove.error ? <FormAlert>{remove.error.message}</FormAlert> : null}
+      <DndContext
+        sensors={sensors}
+        collisionDetection={closestCenter}
+        onDragEnd={onDragEnd}
+        accessibility={{
+          screenReaderInstructions: {
+            draggable:
+              'To move a step, press space, use the up and down arrows, then press space again.',
+          },
+        }}
+      >
+        <SortableContext items={ids} strategy={verticalListSortingStrategy}>
+          <ol aria-label="Run sheet" className="space-y-3">
+            {steps.map((step, index) => (
+              <StepItem
+                key={step.id}
+                step={step}
+                number={index + 1}
+                isLast={index === steps.length - 1}
+                line={lines.find((l) => l.id === step.recipeLineId)}
+                canEdit={canEdit}
+                onMove={(by) => move(index, index + by)}
+                onDelete={() => remove.mutate(step.id)}
+              />
+            ))}
+          </ol>
+        </SortableContext>
+      </DndContext>
+    </div>
+  );
+}

@@ -1,0 +1,95 @@
+import { dyeCreateSchema, dyeKinds } from '@vatside/contracts/workbench-shelf';
+import { COLORANTS } from '@vatside/dye-kit';
+import { Button } from '@vatside/ui/Button';
+import { FormAlert } from '@vatside/ui/form/FormAlert';
+import { formResolver } from '@vatside/ui/form/form-resolver.ts';
+import { SelectField } from '@vatside/ui/form/SelectField';
+import { showServerError } from '@vatside/ui/form/server-errors.ts';
+import { TextField } from '@vatside/ui/form/TextField';
+import { useForm } from 'react-hook-form';
+import { useCreateDye } from '../api.ts';
+import { dyeKindNames } from './kind-names.ts';
+
+const blank = { kind: 'liquidFoodColor' as const, name: '', colorantIds: [], swatchHex: '#2a6e80' };
+
+/** Put a dye on the shelf: what it is, what is in it, and the color it gives. */
+export function DyeForm({ slug }: { slug: string }) {
+  const create = useCreateDye(slug);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    reset,
+    watch,
+    formState: { errors, isSubmitting },
+  } = useForm({ resolver: formResolver(dyeCreateSchema), defaultValues: blank });
+  const hex = watch('swatchHex');
+
+  const onSubmit = handleSubmit(async (dye) => {
+    try {
+      await create.mutateAsync(dye);
+      reset(blank);
+    } catch (error) {
+      showServerError(error, setError, ['kind', 'name', 'colorantIds', 'swatchHex']);
+    }
+  });
+
+  return (
+    <form noValidate onSubmit={onSubmit} aria-label="Add a dye" className="space-y-4">
+      {errors.root?.server ? <FormAlert>{errors.root.server.message}</FormAlert> : null}
+      <div className="grid gap-4 sm:grid-cols-2">
+        <TextField
+          label="Dye name"
+          hint="As you call it, e.g. “sea glass teal”."
+          error={errors.name?.message}
+          {...register('name')}
+        />
+        <SelectField label="Kind" error={errors.kind?.message} {...register('kind')}>
+          {dyeKinds.map((kind) => (
+            <option key={kind} value={kind}>
+              {dyeKindNames[kind]}
+            </option>
+          ))}
+        </SelectField>
+      </div>
+      <fieldset className="space-y-2">
+        <legend className="font-bold">Colorants on the label (if listed)</legend>
+        <div className="grid gap-2 sm:grid-cols-2">
+          {COLORANTS.map((colorant) => (
+            <label
+              key={colorant.id}
+              className="flex min-h-12 items-center gap-3 rounded-xl border-2 border-wool-300 bg-white px-3"
+            >
+              <input
+                type="checkbox"
+                value={colorant.id}
+                className="size-6 accent-vat-800"
+                {...register('colorantIds')}
+              />
+              <span>
+                {colorant.fdcName} <span className="text-vat-800">({colorant.euNumber})</span>
+              </span>
+            </label>
+          ))}
+        </div>
+        {errors.colorantIds?.message ? (
+          <p className="font-bold text-madder-700">{errors.colorantIds.message}</p>
+        ) : null}
+      </fieldset>
+      <div className="flex flex-wrap items-end gap-4">
+        <TextField
+          label="Swatch color"
+          hint="The color it dyes on white wool."
+          type="color"
+          className="w-48"
+          suffix={hex}
+          error={errors.swatchHex?.message}
+          {...register('swatchHex')}
+        />
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Adding…' : 'Add dye'}
+        </Button>
+      </div>
+    </form>
+  );
+}

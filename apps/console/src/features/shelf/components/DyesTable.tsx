@@ -1,0 +1,78 @@
+import { createColumnHelper } from '@tanstack/react-table';
+import type { Dye } from '@vatside/contracts/workbench-shelf';
+import { FormAlert } from '@vatside/ui/form/FormAlert';
+import { Swatch } from '@vatside/ui/Swatch';
+import { useMemo } from 'react';
+import { DataTable } from '../../../components/DataTable.tsx';
+import { TwoPressButton } from '../../../components/TwoPressButton.tsx';
+import { useDeleteDye } from '../api.ts';
+import { dyeKindNames } from './kind-names.ts';
+
+const column = createColumnHelper<Dye>();
+
+export function DyesTable({
+  slug,
+  dyes,
+  canEdit,
+}: {
+  slug: string;
+  dyes: Dye[];
+  canEdit: boolean;
+}) {
+  const remove = useDeleteDye(slug);
+  const { mutate } = remove;
+  const columns = useMemo(
+    () => [
+      column.accessor('name', {
+        header: 'Dye',
+        cell: ({ row }) => (
+          <Swatch hex={row.original.swatchHex} label={row.original.name} showHex />
+        ),
+      }),
+      column.accessor('kind', { header: 'Kind', cell: ({ getValue }) => dyeKindNames[getValue()] }),
+      column.accessor('colorants', {
+        header: 'Colorants',
+        cell: ({ getValue }) =>
+          getValue().length === 0 ? (
+            <span className="text-vat-800">Not listed</span>
+          ) : (
+            <ul>
+              {getValue().map((c) => (
+                <li key={c.id}>
+                  {c.fdcName} <span className="text-vat-800">({c.euNumber})</span>
+                </li>
+              ))}
+            </ul>
+          ),
+      }),
+      ...(canEdit
+        ? [
+            column.display({
+              id: 'delete',
+              header: () => <span className="sr-only">Delete</span>,
+              cell: ({ row }) => (
+                <TwoPressButton
+                  label={`Delete ${row.original.name}`}
+                  confirm="Yes, delete"
+                  onConfirm={() => mutate(row.original.id)}
+                />
+              ),
+            }),
+          ]
+        : []),
+    ],
+    [canEdit, mutate],
+  );
+  return (
+    <div className="space-y-3">
+      {remove.error ? <FormAlert>{remove.error.message}</FormAlert> : null}
+      <DataTable
+        caption="Dyes on the shelf"
+        data={dyes}
+        columns={columns}
+        rowId={(dye) => dye.id}
+        empty="No dyes on the shelf yet. Add the first one below."
+      />
+    </div>
+  );
+}

@@ -1,0 +1,38 @@
+import { queryOptions, skipToken } from '@tanstack/react-query';
+import type { LiveState } from '@vatside/contracts/live';
+import { currentLiveSchema, liveProgramSchema } from '@vatside/contracts/live-program';
+import { apiGet } from '@vatside/ui/api-client.ts';
+
+/** How often a studio page or the waiting screen asks whether a session has started. */
+export const liveCheckEveryMs = 20_000;
+
+/** The studio's running public session, or `{ live: null }`. */
+export const studioLiveQueryOptions = (slug: string) =>
+  queryOptions({
+    queryKey: ['live', 'studio', slug],
+    queryFn: ({ signal }) =>
+      apiGet(`/api/studios/${encodeURIComponent(slug)}/live`, currentLiveSchema, { signal }),
+    refetchInterval: liveCheckEveryMs,
+  });
+
+/** The run sheets of a session: fixed when it starts, so fetched once. */
+export const liveProgramQueryOptions = (sessionId: string) =>
+  queryOptions({
+    queryKey: ['live', 'program', sessionId],
+    queryFn: ({ signal }) =>
+      apiGet(`/api/live-sessions/${encodeURIComponent(sessionId)}/program`, liveProgramSchema, {
+        signal,
+      }),
+    staleTime: Infinity,
+  });
+
+/**
+ * The session's state as the socket last delivered it. Nothing fetches it: the join snapshot and
+ * `live:state` pushes write it into the cache (see hooks/use-live-session.ts).
+ */
+export const liveStateQueryOptions = (sessionId: string) =>
+  queryOptions<LiveState>({
+    queryKey: ['live', 'state', sessionId],
+    queryFn: skipToken,
+    staleTime: Infinity,
+  });

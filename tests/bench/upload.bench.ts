@@ -1,0 +1,134 @@
+// pnpm bench:upload [--shares 20]
+//
+// One server process (a child, as `npm start` runs it) and N viewers sharing a skein at the same
+// moment: each share is one 12-megapixel JPEG through the real route (sniffing, pixel limit,
+// orientation, sRGB, renditions, yarn-area palette, object store, rows). Each share is timed
+// from its request to the 201, which comes after the renditions are stored and the rows saved.
+// Prints median and p95 and the server's peak memory (VmHWM from /proc) beside the targets.
+import { spawn, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { parseArgs } from 'node:util';
+import type { RunningServer } from '../../apps/server/src/server.ts';
+import { signUpVerified } from '../../apps/server/src/test-support/client.ts';
+import {
+  YARN_ON_LEFT,
+  baseDetails,
+  largeSkeinJpeg,
+  makeSharingMonth,
+  shareForm,
+  sharePath,
+} from '../../apps/server/src/test-support/sharing-fixtures.ts';
+
+const { values: args } = parseArgs({ options: { shares: { type: 'string', default: '20' } } });
+const shareCount = Math.min(200, Math.max(1, Number(args.shares)));
+const targets = { medianS: 1.5, peakMemoryMb: 700 };
+
+const serverDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../apps/server');
+const say = (text: string) => console.log(`[bench:upload] ${text}`);
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      probe.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
+    });
+  });
+}
+
+/** Peak resident memory of a process (VmHWM), MB. */
+function peakMemoryMb(pid: number): number {
+  const status = readFileSync(`/proc/${pid}/status`, 'utf8');
+  return Number(status.match(/VmHWM:\s+(\d+)/)?.[1] ?? 0) / 1024;
+}
+
+async function startServerProcess(): Promise<{ child: ChildProcess; url: string }> {
+  const port = await freePort();
+  const url = `http://127.0.0.1:${port}`;
+  const child = spawn(process.execPath, ['--import', 'tsx', 'src/main.ts'], {
+    cwd: serverDir,
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      PUBLIC_ORIGIN: url,
+      LOG_LEVEL: 'warn',
+      MAIL_WORKER_ENABLED: 'false',
+      AUTH_ATTEMPTS_PER_MINUTE: '1000',
+      APPS_DIR: '',
+      REDIS_URL: '',
+    },
+    stdio: ['ignore', 'inherit', 'inherit'],
+  });
+  const deadline = Date.now() + 60_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`the server exited (${child.exitCode})`);
+    const up = await fetch(`${url}/api/health`).then(
+      (r) => r.ok,
+      () => false,
+    );
+    if (up) return { child, url };
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error('the server did not answer /api/health within 60 s');
+}
+
+/** The fixtures need only the URL and the origin of a RunningServer. */
+const asServer = (url: string) =>
+  ({ url, deps: { config: { PUBLIC_ORIGIN: url } } }) as unknown as RunningServer;
+
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? NaN;
+
+async function main() {
+  const photo = await largeSkeinJpeg();
+  say(
+    `${shareCount} concurrent shares of a 4000 × 3000 JPEG (${(photo.length / 1e6).toFixed(1)} MB)`,
+  );
+  const { child, url } = await startServerProcess();
+  try {
+    const { client: host } = await signUpVerified(asServer(url), 'bench-upload', 'Bench Host');
+    const slug = `bench-up-${Date.now().toString(36)}`;
+    const studio = await host.request('POST', '/api/studios', {
+      name: 'Benchmark Cove Studio',
+      slug,
+      accentHex: '#1f6f78',
+    });
+    if (studio.status !== 201) throw new Error(`studio: ${studio.status}`);
+    const month = await makeSharingMonth(host, slug);
+    const baselineMb = peakMemoryMb(child.pid!);
+
+    const results = await Promise.all(
+      Array.from({ length: shareCount }, async () => {
+        const body = shareForm([photo], { ...baseDetails, crops: [YARN_ON_LEFT] });
+        const started = performance.now();
+        const res = await host.request('POST', sharePath({ slug }, month.dyeAlong.id), body);
+        const ms = performance.now() - started;
+        return { ms, ok: res.status === 201, detail: res.status === 201 ? '' : await res.text() };
+      }),
+    );
+    const errors = results.filter((r) => !r.ok);
+    const times = results.map((r) => r.ms).sort((a, b) => a - b);
+    const median = percentile(times, 50) / 1000;
+    const p95 = percentile(times, 95) / 1000;
+    const peak = peakMemoryMb(child.pid!);
+    say(`median ${median.toFixed(2)} s   (target < ${targets.medianS} s)`);
+    say(`p95    ${p95.toFixed(2)} s`);
+    say(
+      `server peak memory ${peak.toFixed(0)} MB   (target < ${targets.peakMemoryMb} MB; ${baselineMb.toFixed(0)} MB before the shares)`,
+    );
+    say(`errors ${errors.length}${errors[0] ? `: ${errors[0].detail.slice(0, 200)}` : ''}`);
+    const met = median < targets.medianS && peak < targets.peakMemoryMb && errors.length === 0;
+    say(met ? 'all targets met' : 'a target was missed');
+    process.exitCode = met ? 0 : 1;
+  } finally {
+    child.kill('SIGTERM');
+  }
+}
+
+await main();
