@@ -6,7 +6,7 @@ import { Card } from '@vatside/ui/Card';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { textLinkClass } from '@vatside/ui/link-class.ts';
-import { useRef, useState, type ReactNode } from 'react';
+import { useMemo, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { liveProgramQueryOptions, viewerPathOf } from '../api.ts';
 import { useHostActions } from '../hooks/use-host-actions.ts';
@@ -135,13 +135,17 @@ function Board({
     else setKeyHint('This step has no timer: the plus key adds one.');
   });
 
-  const amounts = state.pots.flatMap((pot, index) => {
-    const potProgram = programPot(pot.potId);
-    const amount = potProgram
-      ? stepAmount(potProgram, potProgram.steps[pot.stepIndex], system)
-      : null;
-    return amount ? [{ potNumber: index + 1, note: amountNote(pot.colorwayName, amount) }] : [];
-  });
+  const amounts = useMemo(
+    () =>
+      state.pots.flatMap((pot, index) => {
+        const potProgram = program.pots.find((p) => p.potId === pot.potId);
+        const amount = potProgram
+          ? stepAmount(potProgram, potProgram.steps[pot.stepIndex], system)
+          : null;
+        return amount ? [{ potNumber: index + 1, note: amountNote(pot.colorwayName, amount) }] : [];
+      }),
+    [state.pots, program, system],
+  );
 
   return (
     <div className="min-h-dvh">

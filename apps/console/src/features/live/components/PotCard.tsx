@@ -3,7 +3,7 @@ import type { LiveProgramPot } from '@vatside/contracts/live-program';
 import type { MeasureSystem } from '@vatside/dye-kit';
 import { Button } from '@vatside/ui/Button';
 import { cx } from '@vatside/ui/cx.ts';
-import { useId, type Ref } from 'react';
+import { useId, useMemo, type Ref } from 'react';
 import { stepAmount } from '../utils/amounts.ts';
 import { timerToggle } from '../utils/timer-control.ts';
 import { PotCountdown } from './PotCountdown.tsx';
@@ -41,6 +41,11 @@ export function PotCard({
   const step = program?.steps[pot.stepIndex];
   const next = program?.steps[pot.stepIndex + 1];
   const toggle = timerToggle(pot.timer, nowMs);
+  // The board re-renders with every tick of the countdown; the amount only with the step.
+  const amount = useMemo(
+    () => (program ? stepAmount(program, step, system) : null),
+    [program, step, system],
+  );
   const act = (
     type: 'step:next' | 'step:previous' | 'timer:start' | 'timer:pause' | 'timer:resume',
   ) => onAction({ type, potId: pot.potId });
@@ -123,9 +128,7 @@ export function PotCard({
       </div>
 
       {/* The step's details sit under the controls, so the buttons stay in reach on a tablet. */}
-      {step ? (
-        <StepFacts step={step} amount={program ? stepAmount(program, step, system) : null} />
-      ) : null}
+      {step ? <StepFacts step={step} amount={amount} /> : null}
       <p className="text-lg text-vat-800">
         <span className="font-bold">Then: </span>
         {next ? next.instruction : 'This is the last step.'}
