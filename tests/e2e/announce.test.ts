@@ -222,7 +222,7 @@ describe('a visitor on a phone in another time zone reads the page', () => {
     expect(await start.textContent()).toContain(expected.time);
     expect(await start.textContent()).toContain(`Your time zone: ${viewerZone}`);
 
-    await page.getByRole('button', { name: '50 g' }).click();
+    await page.getByRole('button', { name: '50 g', exact: true }).click();
     expect(
       await page.getByRole('button', { name: 'US cups & spoons' }).getAttribute('aria-pressed'),
     ).toBe('true');

@@ -45,8 +45,8 @@ export function Component() {
   return (
     <div className="space-y-6">
       <div className="space-y-2">
-        <Link to=".." relative="path" className={textLinkClass}>
-          <span aria-hidden="true">← </span>All dye-alongs
+        <Link to=".." relative="path" className={`${textLinkClass} gap-1`}>
+          <span aria-hidden="true">←</span>All dye-alongs
         </Link>
         <div className="flex flex-wrap items-center gap-3">
           <h2 className="font-display text-3xl font-semibold">{dyeAlong.title}</h2>

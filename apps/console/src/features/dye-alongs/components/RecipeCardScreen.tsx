@@ -42,8 +42,8 @@ export function RecipeCardScreen({
   return (
     <div className="space-y-6 px-4 py-6">
       <div className="vs-print-hide mx-auto flex max-w-4xl flex-wrap items-end gap-4 rounded-card bg-vat-900 p-4 text-wool-50 [--vs-focus:var(--color-marigold-300)]">
-        <Link to={backTo} className={`${textLinkClass} text-wool-50 hover:text-marigold-300`}>
-          <span aria-hidden="true">← </span>Back to the dye-along
+        <Link to={backTo} className={`${textLinkClass} gap-1 text-wool-50 hover:text-marigold-300`}>
+          <span aria-hidden="true">←</span>Back to the dye-along
         </Link>
         <SelectField
           label="Paper"

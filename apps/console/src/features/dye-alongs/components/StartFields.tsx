@@ -34,7 +34,9 @@ export function StartFields({
   errors: FieldErrors<DyeAlongFormValues>;
 }) {
   const [startsAtLocal, timeZone] = useWatch({ control, name: ['startsAtLocal', 'timeZone'] });
-  const [checkZone, setCheckZone] = useState(() => otherZone(timeZone));
+  // Follows the form's zone until the host picks one, so the check never repeats the start.
+  const [pickedZone, setPickedZone] = useState<string>();
+  const checkZone = pickedZone ?? otherZone(timeZone);
   const iso =
     localPattern.test(startsAtLocal) && existsIn(startsAtLocal, timeZone)
       ? localToIso(startsAtLocal, timeZone)
@@ -85,7 +87,7 @@ export function StartFields({
           label="Also show it in"
           className="max-w-sm"
           value={checkZone}
-          onChange={(event) => setCheckZone(event.target.value)}
+          onChange={(event) => setPickedZone(event.target.value)}
         >
           <ZoneOptions current={checkZone} />
         </SelectField>

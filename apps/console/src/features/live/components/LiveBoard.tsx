@@ -166,8 +166,8 @@ function Board({
           role="alert"
           className="bg-madder-700 px-4 py-2 text-center text-xl font-bold text-wool-50"
         >
-          Offline — reconnecting. The pots keep going on the server; nothing you press is sent until
-          the connection is back.
+          Offline — reconnecting. The timers keep running on the server; the buttons send nothing
+          until the connection is back.
         </p>
       ) : null}
       <main id="main" className="space-y-4 p-4">

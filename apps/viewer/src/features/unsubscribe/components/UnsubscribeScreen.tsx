@@ -46,7 +46,13 @@ export function UnsubscribeScreen({ token }: { token: string }) {
           tabIndex={-1}
           className="font-display text-3xl font-semibold"
         >
-          {stop.isSuccess ? 'Done: no more e-mails' : 'You are already off the list'}
+          {stop.isSuccess ? (
+            <>
+              Done: no more <span className="whitespace-nowrap">e-mails</span>
+            </>
+          ) : (
+            'You are already off the list'
+          )}
         </h1>
         <p className="text-lg">
           {studio.name} will not e-mail you about dye-alongs. To hear from the studio again, turn
@@ -59,7 +65,7 @@ export function UnsubscribeScreen({ token }: { token: string }) {
   return (
     <Card as="section" aria-labelledby="unsubscribe-title" className="space-y-4">
       <h1 id="unsubscribe-title" className="font-display text-3xl font-semibold">
-        Stop e-mails from {studio.name}?
+        Stop <span className="whitespace-nowrap">e-mails</span> from {studio.name}?
       </h1>
       <p className="text-lg">
         No more dye-along announcements or day-before reminders from this studio. Its page stays
