@@ -19,6 +19,8 @@ export default defineConfig({
   test: {
     name: 'viewer',
     environment: 'jsdom',
+    // Generous: CI runs every project at once on two cores.
+    testTimeout: 30_000,
     setupFiles: ['./src/testing/setup.ts'],
   },
 });
