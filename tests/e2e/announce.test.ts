@@ -172,6 +172,14 @@ describe('the host plans and announces a dye-along (desktop)', () => {
     expect(detail.status).toBe('announced');
     expect(detail.startsAtHost.local).toBe(startInTenDays());
     startsAt = detail.startsAt;
+
+    // The month's list shows it with its status in words.
+    await page.goto(
+      `${appOrigin}/console/studios/${slug}/dye-alongs?month=${startInTenDays().slice(0, 7)}`,
+    );
+    const row = page.getByRole('listitem').filter({ hasText: title });
+    await expect.poll(() => row.textContent()).toContain('Announced');
+    await saveScreenshot(page, 'announce-console-month');
     expect(problems).toEqual([]);
     await context.close();
   });
@@ -213,7 +221,10 @@ describe('a visitor on a phone in another time zone reads the page', () => {
     const page = await context.newPage();
     const problems = watchPage(page);
     await page.goto(`${appOrigin}/s/${slug}`);
-    await page.getByRole('link', { name: 'See what to get ready' }).click();
+    const next = page.getByRole('link', { name: 'See what to get ready' });
+    await next.waitFor();
+    await saveScreenshot(page, 'announce-viewer-studio-phone');
+    await next.click();
     await page.getByRole('heading', { name: title, level: 1 }).waitFor();
 
     const expected = onClock(startsAt, viewerZone);
@@ -224,7 +235,7 @@ describe('a visitor on a phone in another time zone reads the page', () => {
 
     await page.getByRole('button', { name: '50 g', exact: true }).click();
     expect(
-      await page.getByRole('button', { name: 'US cups & spoons' }).getAttribute('aria-pressed'),
+      await page.getByRole('button', { name: 'US measures' }).getAttribute('aria-pressed'),
     ).toBe('true');
     await page.getByText('1 × 50 g (1.76 oz)').waitFor();
     // 1 % depth of shade from a 1 % stock: 50 mL for 50 g, in US spoons 3 tbsp + 1 ⅛ tsp.

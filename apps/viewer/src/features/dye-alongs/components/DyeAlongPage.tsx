@@ -2,6 +2,7 @@ import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { ApiError } from '@vatside/ui/api-client.ts';
 import { Card } from '@vatside/ui/Card';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
+import { textLinkClass } from '@vatside/ui/link-class.ts';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { PrepChecklistView } from '@vatside/ui/supplies/PrepChecklistView';
 import { SupplyListView } from '@vatside/ui/supplies/SupplyListView';
@@ -58,6 +59,14 @@ export function DyeAlongPage({ slug, dyeAlongId }: { slug: string; dyeAlongId: s
         {status ? <p className="text-lg font-bold">{status}</p> : null}
       </header>
       <StartTime dyeAlong={dyeAlong} timeZone={reader.timeZone} />
+      <nav aria-label="On this page" className="flex flex-wrap gap-x-6">
+        <a href="#supplies-title" className={textLinkClass}>
+          What to get
+        </a>
+        <a href="#prep-title" className={textLinkClass}>
+          Getting ready
+        </a>
+      </nav>
       {dyeAlong.inspiration ? <InspirationPalette inspiration={dyeAlong.inspiration} /> : null}
       {dyeAlong.description ? (
         <p className="text-lg whitespace-pre-line">{dyeAlong.description}</p>

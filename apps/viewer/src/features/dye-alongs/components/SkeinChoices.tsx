@@ -9,13 +9,13 @@ import { useState, type FormEvent } from 'react';
 /** Skein sizes people dye most (common practice): minis, the usual 100 g, sock and big skeins. */
 const commonWeightsG = [50, 100, 115, 150] as const;
 const systems: { value: MeasureSystem; label: string }[] = [
-  { value: 'us', label: 'US cups & spoons' },
+  { value: 'us', label: 'US measures' },
   { value: 'metric', label: 'Metric' },
 ];
 
 const choiceClass = (on: boolean) =>
   cx(
-    'min-h-14 rounded-xl border-2 border-vat-800 px-3 text-lg font-bold',
+    'min-h-14 rounded-xl border-2 border-vat-800 px-1 text-lg font-bold whitespace-nowrap',
     on ? 'bg-vat-800 text-wool-50' : 'bg-white text-vat-900 hover:bg-vat-100',
   );
 
