@@ -4,13 +4,19 @@
 export VATSIDE_PROFILE=test
 source "$(dirname "${BASH_SOURCE[0]}")/../../infra-local/env.sh"
 bash "$VATSIDE_ROOT/infra-local/postgres.sh" start
-mail_pid=""
+# The server reports healthy only when every service answers: start what is not running.
+started_pids=()
+trap 'for pid in "${started_pids[@]}"; do kill "$pid" 2>/dev/null; done' EXIT
 if ! port_in_use "$SMTP_PORT"; then
   bash "$VATSIDE_ROOT/infra-local/mail.sh" >"$VATSIDE_LOG_DIR/mail.log" 2>&1 &
-  mail_pid=$!
-  trap '[ -n "$mail_pid" ] && kill "$mail_pid" 2>/dev/null' EXIT
+  started_pids+=("$!")
   wait_for_port "$SMTP_PORT" "The mail catcher (SMTP)"
   wait_for_port "$MAIL_WEB_PORT" "The mail catcher (inbox)"
+fi
+if ! port_in_use "$S3_PORT"; then
+  bash "$VATSIDE_ROOT/infra-local/object-store.sh" >"$VATSIDE_LOG_DIR/object-store.log" 2>&1 &
+  started_pids+=("$!")
+  wait_for_port "$S3_PORT" "The object store"
 fi
 (cd "$VATSIDE_ROOT" && pnpm --silent --filter @vatside/db run migrate) || die "Applying migrations failed"
 # Each viewer holds one socket in the server and one here: raise the open-files limit as far
