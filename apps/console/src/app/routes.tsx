@@ -62,4 +62,11 @@ export const routes: RouteObject[] = [
     hydrateFallbackElement: <LoadingBlock label="Setting out the pots…" />,
     lazy: () => import('./routes/live-board.tsx'),
   },
+  {
+    // Moderators answer questions here without the pot board.
+    path: '/studios/:slug/live/:sessionId/questions',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Opening the questions…" />,
+    lazy: () => import('./routes/live-questions.tsx'),
+  },
 ];

@@ -11,6 +11,11 @@ export class FakeLiveSocket {
 
   constructor(private readonly answers: Record<string, Answer>) {}
 
+  /** Adds or replaces how the fake server answers one event. */
+  answer(event: string, answer: Answer) {
+    this.answers[event] = answer;
+  }
+
   on(event: string, handler: Handler) {
     if (!this.handlers.has(event)) this.handlers.set(event, new Set());
     this.handlers.get(event)?.add(handler);

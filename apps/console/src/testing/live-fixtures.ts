@@ -4,7 +4,9 @@ import {
   type HostAction,
   type LiveState,
 } from '@vatside/contracts/live';
+import type { SessionDyeLog } from '@vatside/contracts/dye-log';
 import type { LiveProgram } from '@vatside/contracts/live-program';
+import type { QuestionQueue } from '@vatside/contracts/questions';
 import { idleTimer } from '@vatside/contracts/pot-timer';
 import { http, HttpResponse } from 'msw';
 import { hostMe, kelpwhistle, kelpwhistleDetail } from './fixtures.ts';
@@ -16,7 +18,7 @@ import { server, signIn } from './server.ts';
 export const sessionId = '6a1e2b3c-4d5e-4f60-8a7b-9c0d1e2f3a4b';
 const lowTideId = '2c3d4e5f-6a7b-4c8d-9e0f-1a2b3c4d5e6f';
 const kelpShadeId = '8d9e0f1a-2b3c-4d5e-8f6a-7b8c9d0e1f2a';
-const tealLineId = 'c0ffee00-0000-4000-8000-000000000001';
+export const tealLineId = 'c0ffee00-0000-4000-8000-000000000001';
 
 const step = (
   id: string,
@@ -97,6 +99,51 @@ export const program: LiveProgram = {
   ],
 };
 
+const emptyQueue: QuestionQueue = {
+  sessionId,
+  view: 'staff',
+  questions: [],
+  mine: [],
+  meToos: [],
+  muted: false,
+  limits: { minIntervalS: 30, perSession: 5, asked: 0 },
+};
+
+/** The dye log before anything is logged: Low tide's teal line, 50 mL planned; no jar. */
+export const emptyDyeLog: SessionDyeLog = {
+  sessionId,
+  mode: 'live',
+  pots: [
+    {
+      potId: lowTideId,
+      colorwayName: 'Low tide',
+      weightOfGoodsG: 100,
+      skeinCount: 1,
+      lines: [
+        {
+          recipeLineId: tealLineId,
+          kind: 'stock',
+          name: 'Rockpool teal',
+          unit: 'mL',
+          plannedAmount: 50,
+          loggedAmount: 0,
+          differencePct: null,
+          stockSolutionId: null,
+          jarVolumeLeftMl: null,
+        },
+      ],
+    },
+    {
+      potId: kelpShadeId,
+      colorwayName: 'Kelp shade',
+      weightOfGoodsG: 100,
+      skeinCount: 1,
+      lines: [],
+    },
+  ],
+  entries: [],
+};
+
 /** Every pot on its first step, as the server starts a session. */
 export function initialState(mode: LiveState['mode'] = 'live'): LiveState {
   return {
@@ -133,6 +180,7 @@ export function fakeLiveServer(start: LiveState, { serverAheadMs = 0 } = {}) {
       clientSentAtMs,
       serverAtMs: Date.now() + serverAheadMs,
     }),
+    'questions:join': () => emptyQueue,
     'live:action': ({ action }: { action: HostAction }) => {
       try {
         state = applyHostAction(
@@ -168,6 +216,7 @@ export function boardAsHost() {
       HttpResponse.json(kelpwhistleDetail('host')),
     ),
     http.get(`/api/live-sessions/${sessionId}/program`, () => HttpResponse.json(program)),
+    http.get(`/api/live-sessions/${sessionId}/dye-log`, () => HttpResponse.json(emptyDyeLog)),
   );
 }
 

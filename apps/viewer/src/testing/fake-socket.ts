@@ -13,8 +13,11 @@ export const fakeServer = {
   refusal: null as RealtimeError | null,
   /** Server clock = Date.now() + this. */
   clockAheadMs: 0,
+  /** Answers a test adds or replaces (e.g. `questions:join`). */
+  answers: {} as Record<string, Answer>,
   sockets: [] as FakeSocket[],
   reset() {
+    this.answers = {};
     this.state = null;
     this.refusal = null;
     this.clockAheadMs = 0;
@@ -95,7 +98,7 @@ export class FakeSocket {
 
   private answer(event: string, payload: unknown): Promise<unknown> {
     this.emitted.push({ event, payload });
-    const answer = defaultAnswers[event];
+    const answer = fakeServer.answers[event] ?? defaultAnswers[event];
     // Like a real ack, the answer arrives later, never within the emit.
     return answer ? Promise.resolve().then(() => answer(payload)) : new Promise(() => undefined);
   }

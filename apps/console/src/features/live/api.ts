@@ -1,11 +1,13 @@
 import { queryOptions, skipToken, useMutation, useQueryClient } from '@tanstack/react-query';
 import { dyeAlongListSchema, type DyeAlong } from '@vatside/contracts/dye-alongs';
+import { sessionDyeLogSchema } from '@vatside/contracts/dye-log';
 import type { LiveState } from '@vatside/contracts/live';
 import {
   currentLiveSchema,
   liveProgramSchema,
   liveSessionStartedSchema,
 } from '@vatside/contracts/live-program';
+import type { QuestionQueue } from '@vatside/contracts/questions';
 import { apiGet, apiSend } from '@vatside/ui/api-client.ts';
 import { studioApi } from '../../lib/studio-path.ts';
 
@@ -90,3 +92,24 @@ export function useStartSession(slug: string) {
 
 /** The viewer app's follow-along, as the server's `viewerPath` names it. */
 export const viewerPathOf = (sessionId: string) => `/live/${encodeURIComponent(sessionId)}`;
+
+/** The session's dye log (plan to prefill from, and every entry); refreshed on `dyeLog:changed`. */
+export const dyeLogQueryOptions = (sessionId: string) =>
+  queryOptions({
+    queryKey: ['live-session', sessionId, 'dye-log'],
+    queryFn: ({ signal }) =>
+      apiGet(`/api/live-sessions/${encodeURIComponent(sessionId)}/dye-log`, sessionDyeLogSchema, {
+        signal,
+      }),
+  });
+
+/**
+ * The question queue as the staff see it. Nothing fetches it: `questions:join` answers with it
+ * and `questions:changed` pushes update it (see hooks/use-question-queue.ts).
+ */
+export const questionQueueQueryOptions = (sessionId: string) =>
+  queryOptions<QuestionQueue>({
+    queryKey: ['live-session', sessionId, 'questions'],
+    queryFn: skipToken,
+    staleTime: Infinity,
+  });

@@ -1,6 +1,7 @@
 import { queryOptions, skipToken } from '@tanstack/react-query';
 import type { LiveState } from '@vatside/contracts/live';
 import { currentLiveSchema, liveProgramSchema } from '@vatside/contracts/live-program';
+import type { QuestionQueue } from '@vatside/contracts/questions';
 import { apiGet } from '@vatside/ui/api-client.ts';
 
 /** How often a studio page or the waiting screen asks whether a session has started. */
@@ -33,6 +34,17 @@ export const liveProgramQueryOptions = (sessionId: string) =>
 export const liveStateQueryOptions = (sessionId: string) =>
   queryOptions<LiveState>({
     queryKey: ['live', 'state', sessionId],
+    queryFn: skipToken,
+    staleTime: Infinity,
+  });
+
+/**
+ * The question queue as this person may see it. Nothing fetches it: `questions:join` answers
+ * with it and the server's pushes update it (see hooks/use-questions.ts).
+ */
+export const questionsQueryOptions = (sessionId: string) =>
+  queryOptions<QuestionQueue>({
+    queryKey: ['live', 'session', sessionId, 'questions'],
     queryFn: skipToken,
     staleTime: Infinity,
   });

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import type { DyeLogPot } from '@vatside/contracts/dye-log';
 import type { HostAction, LiveState } from '@vatside/contracts/live';
 import type { LiveProgram } from '@vatside/contracts/live-program';
 import type { MeasureSystem } from '@vatside/dye-kit';
@@ -9,6 +10,7 @@ import { textLinkClass } from '@vatside/ui/link-class.ts';
 import { useMemo, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { liveProgramQueryOptions, viewerPathOf } from '../api.ts';
+import { useDyeLog } from '../hooks/use-dye-log.ts';
 import { useHostActions } from '../hooks/use-host-actions.ts';
 import { useHostSession, type Connection } from '../hooks/use-host-session.ts';
 import { useHostSocket } from '../hooks/use-host-socket.ts';
@@ -18,11 +20,14 @@ import { useTicker } from '../hooks/use-ticker.ts';
 import { amountNote, stepAmount } from '../utils/amounts.ts';
 import type { KeyCommand } from '../utils/keys.ts';
 import { timerToggle } from '../utils/timer-control.ts';
+import type { LiveSocket } from '../socket.ts';
 import { BoardBar } from './BoardBar.tsx';
+import { DyeLogPanel, type DyeLogPanelProps } from './DyeLogPanel.tsx';
 import { EndSession } from './EndSession.tsx';
 import { NoteToPhones } from './NoteToPhones.tsx';
 import { PotCard } from './PotCard.tsx';
 import { ShortcutList } from './ShortcutList.tsx';
+import { StaffQuestions } from './StaffQuestions.tsx';
 import { StreamDelayForm } from './StreamDelayForm.tsx';
 import { ViewerLink } from './ViewerLink.tsx';
 
@@ -73,6 +78,7 @@ export function LiveBoard({
   }
   return (
     <Board
+      socket={socket}
       state={session.state}
       program={program.data}
       viewerCount={session.viewerCount}
@@ -87,6 +93,7 @@ export function LiveBoard({
 }
 
 function Board({
+  socket,
   state,
   program,
   viewerCount,
@@ -97,6 +104,7 @@ function Board({
   refusals,
   send,
 }: {
+  socket: LiveSocket;
   state: LiveState;
   program: LiveProgram;
   viewerCount: number | undefined;
@@ -113,6 +121,8 @@ function Board({
   const potRefs = useRef<(HTMLElement | null)[]>([]);
   const rehearsal = state.mode === 'rehearsal';
   const programPot = (potId: string) => program.pots.find((p) => p.potId === potId);
+  const dyeLog = useDyeLog(socket, state.sessionId);
+  const logPot = (potId: string) => dyeLog.log.data?.pots.find((p) => p.potId === potId);
 
   usePotKeys((command: KeyCommand) => {
     if (command.kind === 'choosePot') {
@@ -173,24 +183,38 @@ function Board({
       <main id="main" className="space-y-4 p-4">
         <div className="grid grid-cols-[repeat(auto-fit,minmax(18rem,1fr))] items-start gap-4">
           {state.pots.map((pot, index) => (
-            <PotCard
-              key={pot.potId}
-              ref={(card) => {
-                potRefs.current[index] = card;
-              }}
-              index={index}
-              pot={pot}
-              program={programPot(pot.potId)}
-              nowMs={nowMs}
-              system={system}
-              chosen={chosen === index}
-              refusal={refusals[pot.potId]}
-              onChoose={() => setChosen(index)}
-              onAction={(action) => void send(action)}
-            />
+            <div key={pot.potId} className="space-y-2">
+              <PotCard
+                ref={(card) => {
+                  potRefs.current[index] = card;
+                }}
+                index={index}
+                pot={pot}
+                program={programPot(pot.potId)}
+                nowMs={nowMs}
+                system={system}
+                chosen={chosen === index}
+                refusal={refusals[pot.potId]}
+                onChoose={() => setChosen(index)}
+                onAction={(action) => void send(action)}
+              />
+              <PotDyeLog
+                log={logPot(pot.potId)}
+                failed={dyeLog.log.isError}
+                entries={dyeLog.log.data?.entries.filter((e) => e.potId === pot.potId) ?? []}
+                refusal={dyeLog.refusals[pot.potId]}
+                onRecord={(lineId, amount) => dyeLog.record(pot.potId, lineId, amount)}
+                onCorrect={(entryId, amount, reason) =>
+                  dyeLog.correct(pot.potId, entryId, amount, reason)
+                }
+              />
+            </div>
           ))}
         </div>
         <div className="grid grid-cols-[repeat(auto-fit,minmax(18rem,1fr))] items-start gap-4">
+          <SidePanel title="Questions">
+            <StaffQuestions socket={socket} sessionId={state.sessionId} />
+          </SidePanel>
           <SidePanel title="To every phone">
             <NoteToPhones
               amounts={amounts}
@@ -232,6 +256,17 @@ function Board({
       </main>
     </div>
   );
+}
+
+/** A pot's dye log once it has loaded; a plain line while it loads or if it cannot. */
+function PotDyeLog({
+  log,
+  failed,
+  ...panel
+}: { log: DyeLogPot | undefined; failed: boolean } & Omit<DyeLogPanelProps, 'pot'>) {
+  if (failed) return <p role="alert">The dye log could not be loaded; reload the board.</p>;
+  if (!log) return <p className="text-vat-800">The dye log is loading…</p>;
+  return <DyeLogPanel pot={log} {...panel} />;
 }
 
 function SidePanel({ title, children }: { title: string; children: ReactNode }) {

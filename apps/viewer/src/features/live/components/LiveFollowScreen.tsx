@@ -8,6 +8,7 @@ import { useKit } from '../hooks/use-kit.ts';
 import { useLiveSession, type JoinRefusal } from '../hooks/use-live-session.ts';
 import { useLiveSocket } from '../hooks/use-live-socket.ts';
 import { useOwnPace } from '../hooks/use-own-pace.ts';
+import { useQuestions } from '../hooks/use-questions.ts';
 import { useServerClock } from '../hooks/use-server-clock.ts';
 import { useTicker } from '../hooks/use-ticker.ts';
 import { useTimerAlarms, type TimerWatch } from '../hooks/use-timer-alarms.ts';
@@ -20,6 +21,7 @@ import { KitSettings } from './KitSettings.tsx';
 import { LiveTopBar } from './LiveTopBar.tsx';
 import { OfflineBanner } from './OfflineBanner.tsx';
 import { PotCard } from './PotCard.tsx';
+import { QuestionsSection } from './QuestionsSection.tsx';
 import { SoundPrompt } from './SoundPrompt.tsx';
 import { SoundSwitch } from './SoundSwitch.tsx';
 
@@ -42,6 +44,7 @@ export function LiveFollowScreen({ program }: { program: LiveProgram }) {
   const own = useOwnPace(program.sessionId);
   const chime = useChime();
   const wakeLock = useWakeLock(true);
+  const questions = useQuestions(socket, program.sessionId);
 
   const serverNowMs = serverNow();
   const localNowMs = Date.now();
@@ -124,6 +127,13 @@ export function LiveFollowScreen({ program }: { program: LiveProgram }) {
           ))}
         </div>
         <div className="space-y-4 lg:col-start-2 lg:row-start-2">
+          <QuestionsSection
+            queue={questions.queue}
+            refusal={questions.refusal}
+            backTo={`/live/${program.sessionId}`}
+            onAsk={questions.ask}
+            onMeToo={questions.meToo}
+          />
           {chime.choice !== null ? (
             <SoundSwitch choice={chime.choice} onTurnOn={chime.turnOn} onTurnOff={chime.turnOff} />
           ) : null}
