@@ -18,10 +18,25 @@ export function Component() {
     return (
       <Panel title="Stovetop">
         <p className="text-lg">Only the studio’s host runs a live session or a rehearsal.</p>
+        <QuestionQueueLink slug={slug} />
       </Panel>
     );
   }
   return <Stovetop slug={slug} />;
+}
+
+/** Moderators answer questions during the live session from their own page. */
+function QuestionQueueLink({ slug }: { slug: string }) {
+  const { data } = useQuery(currentLiveQueryOptions(slug));
+  if (!data?.live) return null;
+  return (
+    <Link
+      to={`${boardPath(slug)(data.live.sessionId)}/questions`}
+      className={`${buttonClass('primary')} mt-4`}
+    >
+      Open the question queue
+    </Link>
+  );
 }
 
 const boardPath = (slug: string) => (sessionId: string) =>
