@@ -35,6 +35,14 @@ export async function attachRedisAdapter(
       cause: error,
     });
   }
+  // A broadcast that races shutdown (a delayed viewer update, a settling count) must not become
+  // an unhandled rejection once the connection is closed: log it and drop it.
+  const publish = pub.publish.bind(pub);
+  pub.publish = ((channel: string, message: string | Buffer) =>
+    publish(channel, message).catch((error: Error) => {
+      logger.warn({ err: error }, 'Redis publish dropped');
+      return 0;
+    })) as typeof pub.publish;
   // Viewer counts ask every process; a process gone quiet should not hold the host's count long.
   io.adapter(createAdapter(pub, sub, { requestsTimeout: 2_000 }));
   return {
