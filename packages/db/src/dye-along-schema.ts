@@ -13,19 +13,13 @@ import {
   uuid,
   varchar,
 } from 'drizzle-orm/pg-core';
+import { createdAt, updatedAt } from './columns.ts';
 import { user } from './auth-schema.ts';
 import { studios } from './schema.ts';
 import { colorways, images } from './workbench-schema.ts';
 
 // The month's dye-along: its schedule and lifecycle, the colorways it dyes, and the e-mails
 // it sends (an outbox the mail job works through, so a restart neither loses nor repeats one).
-
-const createdAt = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow();
-const updatedAt = () =>
-  timestamp('updated_at', { withTimezone: true })
-    .notNull()
-    .defaultNow()
-    .$onUpdate(() => new Date());
 
 export const dyeAlongStatus = pgEnum('dye_along_status', [
   'draft',

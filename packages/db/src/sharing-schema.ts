@@ -14,6 +14,7 @@ import {
   uuid,
   varchar,
 } from 'drizzle-orm/pg-core';
+import { createdAt, updatedAt } from './columns.ts';
 import { user } from './auth-schema.ts';
 import { dyeAlongs } from './dye-along-schema.ts';
 import { studios } from './schema.ts';
@@ -21,13 +22,6 @@ import { colorways, type FiberContentPart, type StoredSwatch } from './workbench
 
 // Sharing and review: viewers' skeins with their photos, the moderators' decisions (an audit
 // that outlives a withdrawn share), the review e-mails' outbox, and the recap running order.
-
-const createdAt = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow();
-const updatedAt = () =>
-  timestamp('updated_at', { withTimezone: true })
-    .notNull()
-    .defaultNow()
-    .$onUpdate(() => new Date());
 
 export const submissionStatus = pgEnum('submission_status', [
   'waiting',

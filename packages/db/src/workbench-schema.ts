@@ -10,22 +10,16 @@ import {
   pgEnum,
   pgTable,
   text,
-  timestamp,
   uuid,
   varchar,
 } from 'drizzle-orm/pg-core';
+import { createdAt, updatedAt } from './columns.ts';
 import { user } from './auth-schema.ts';
 import { studios } from './schema.ts';
 
 // The host's workbench: the dye shelf, bases, pots, colorways with recipes and run sheets, and
 // images with their palettes. Every row belongs to one studio; the server checks the role.
 
-const createdAt = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow();
-const updatedAt = () =>
-  timestamp('updated_at', { withTimezone: true })
-    .notNull()
-    .defaultNow()
-    .$onUpdate(() => new Date());
 const studioId = () =>
   uuid('studio_id')
     .notNull()
