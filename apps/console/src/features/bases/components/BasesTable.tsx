@@ -5,7 +5,7 @@ import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { WarningList } from '@vatside/ui/WarningList';
 import { useMemo } from 'react';
 import { DataTable } from '../../../components/DataTable.tsx';
-import { TwoPressButton } from '../../../components/TwoPressButton.tsx';
+import { deleteColumn } from '../../../components/delete-column.tsx';
 import { formatAmount } from '../../../lib/format.ts';
 import { useDeleteBase } from '../api.ts';
 import { fiberNames, weightClassNames } from './names.ts';
@@ -83,21 +83,7 @@ export function BasesTable({
           </div>
         ),
       }),
-      ...(canEdit
-        ? [
-            column.display({
-              id: 'delete',
-              header: () => <span className="sr-only">Delete</span>,
-              cell: ({ row }) => (
-                <TwoPressButton
-                  label={`Delete ${row.original.name}`}
-                  confirm="Yes, delete"
-                  onConfirm={() => mutate(row.original.id)}
-                />
-              ),
-            }),
-          ]
-        : []),
+      ...(canEdit ? [deleteColumn<Base>(mutate)] : []),
     ],
     [canEdit, mutate],
   );

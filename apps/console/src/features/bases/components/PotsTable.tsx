@@ -4,7 +4,7 @@ import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { StatusPill } from '@vatside/ui/StatusPill';
 import { useMemo } from 'react';
 import { DataTable } from '../../../components/DataTable.tsx';
-import { TwoPressButton } from '../../../components/TwoPressButton.tsx';
+import { deleteColumn } from '../../../components/delete-column.tsx';
 import { useDeletePot } from '../api.ts';
 import { capacityLabel } from './capacity.ts';
 import { potMaterialNames } from './names.ts';
@@ -43,21 +43,7 @@ export function PotsTable({
           </span>
         ),
       }),
-      ...(canEdit
-        ? [
-            column.display({
-              id: 'delete',
-              header: () => <span className="sr-only">Delete</span>,
-              cell: ({ row }) => (
-                <TwoPressButton
-                  label={`Delete ${row.original.name}`}
-                  confirm="Yes, delete"
-                  onConfirm={() => mutate(row.original.id)}
-                />
-              ),
-            }),
-          ]
-        : []),
+      ...(canEdit ? [deleteColumn<Pot>(mutate)] : []),
     ],
     [canEdit, mutate],
   );

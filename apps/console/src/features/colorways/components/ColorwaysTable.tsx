@@ -6,7 +6,7 @@ import { Swatch } from '@vatside/ui/Swatch';
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import { DataTable } from '../../../components/DataTable.tsx';
-import { TwoPressButton } from '../../../components/TwoPressButton.tsx';
+import { deleteColumn } from '../../../components/delete-column.tsx';
 import { formatAmount } from '../../../lib/format.ts';
 import { useDeleteColorway } from '../api.ts';
 import { techniqueNames } from './names.ts';
@@ -56,21 +56,7 @@ export function ColorwaysTable({
         cell: ({ row }) =>
           `${row.original.recipeLines.length} line${row.original.recipeLines.length === 1 ? '' : 's'} · ${row.original.skeinCount} × ${formatAmount(row.original.weightOfGoodsG)} g`,
       }),
-      ...(canEdit
-        ? [
-            column.display({
-              id: 'delete',
-              header: () => <span className="sr-only">Delete</span>,
-              cell: ({ row }) => (
-                <TwoPressButton
-                  label={`Delete ${row.original.name}`}
-                  confirm="Yes, delete"
-                  onConfirm={() => mutate(row.original.id)}
-                />
-              ),
-            }),
-          ]
-        : []),
+      ...(canEdit ? [deleteColumn<ColorwaySummary>(mutate)] : []),
     ],
     [canEdit, mutate],
   );

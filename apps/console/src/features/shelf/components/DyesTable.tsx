@@ -4,7 +4,7 @@ import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { Swatch } from '@vatside/ui/Swatch';
 import { useMemo } from 'react';
 import { DataTable } from '../../../components/DataTable.tsx';
-import { TwoPressButton } from '../../../components/TwoPressButton.tsx';
+import { deleteColumn } from '../../../components/delete-column.tsx';
 import { useDeleteDye } from '../api.ts';
 import { dyeKindNames } from './kind-names.ts';
 
@@ -45,21 +45,7 @@ export function DyesTable({
             </ul>
           ),
       }),
-      ...(canEdit
-        ? [
-            column.display({
-              id: 'delete',
-              header: () => <span className="sr-only">Delete</span>,
-              cell: ({ row }) => (
-                <TwoPressButton
-                  label={`Delete ${row.original.name}`}
-                  confirm="Yes, delete"
-                  onConfirm={() => mutate(row.original.id)}
-                />
-              ),
-            }),
-          ]
-        : []),
+      ...(canEdit ? [deleteColumn<Dye>(mutate)] : []),
     ],
     [canEdit, mutate],
   );
