@@ -11,6 +11,8 @@ case "$VATSIDE_PROFILE" in
   test) base_port=4500 ;;
   *) echo "VATSIDE_PROFILE must be demo or test, not '$VATSIDE_PROFILE'" >&2; exit 2 ;;
 esac
+# A second checkout on the same machine moves all six ports at once.
+base_port="${VATSIDE_PORT_BASE:-$base_port}"
 
 # PostgreSQL runs as the postgres system user, which cannot enter root's 0700 home,
 # so data lives under /var/tmp, one folder per checkout (a hash of its path).

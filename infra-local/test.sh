@@ -35,7 +35,8 @@ export VATSIDE_TEST_RESULTS="$VATSIDE_ROOT/.local/test/results"
 rm -rf "$VATSIDE_TEST_RESULTS" && mkdir -p "$VATSIDE_TEST_RESULTS"
 status=0
 say "Set-up took $(($(date +%s) - started)) s"
-pnpm exec vitest run --reporter=default --reporter=json \
+# Arguments narrow the run while working, e.g. `npm test -- apps/server/src/routes/review.test.ts`.
+pnpm exec vitest run "$@" --reporter=default --reporter=json \
   --outputFile.json="$VATSIDE_TEST_RESULTS/vitest.json" || status=$?
 
 echo "[vatside] npm test took $(($(date +%s) - started)) s"
