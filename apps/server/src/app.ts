@@ -72,8 +72,14 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   );
-  // better-auth reads its own request bodies, so it goes before the JSON parser.
-  app.all(`${authBasePath}/{*rest}`, toNodeHandler(deps.auth));
+  // better-auth reads its own request bodies, so it goes before the JSON parser. Its own origin
+  // check skips requests without a cookie, so a foreign page could sign a visitor in to the
+  // attacker's account (login CSRF): the same-origin lock covers these routes too.
+  app.all(
+    `${authBasePath}/{*rest}`,
+    sameOriginOnly(config.PUBLIC_ORIGIN),
+    toNodeHandler(deps.auth),
+  );
   app.use(
     '/api',
     sameOriginOnly(config.PUBLIC_ORIGIN),

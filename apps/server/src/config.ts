@@ -61,17 +61,28 @@ const configSchema = z.object({
 
 export type Config = z.infer<typeof configSchema>;
 
+const productionSecrets = [
+  'BETTER_AUTH_SECRET',
+  'DATABASE_URL',
+  'S3_ACCESS_KEY_ID',
+  'S3_SECRET_ACCESS_KEY',
+  'SMTP_URL',
+] as const;
+
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const parsed = configSchema.safeParse(env);
   if (!parsed.success) {
     const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
     throw new Error(`Invalid configuration:\n  ${problems.join('\n  ')}`);
   }
-  if (
-    parsed.data.NODE_ENV === 'production' &&
-    parsed.data.BETTER_AUTH_SECRET.startsWith('local-only')
-  ) {
-    throw new Error('Invalid configuration:\n  BETTER_AUTH_SECRET must be set in production');
+  if (parsed.data.NODE_ENV === 'production') {
+    // The loopback defaults are for the local fakes; secrets come only from the environment.
+    const missing = productionSecrets.filter((name) => !env[name]);
+    if (parsed.data.BETTER_AUTH_SECRET.startsWith('local-only')) missing.push('BETTER_AUTH_SECRET');
+    if (missing.length > 0) {
+      const names = [...new Set(missing)].map((name) => `${name} must be set in production`);
+      throw new Error(`Invalid configuration:\n  ${names.join('\n  ')}`);
+    }
   }
   return parsed.data;
 }

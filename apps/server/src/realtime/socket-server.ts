@@ -68,6 +68,13 @@ export function createRealtime(
   const io: RealtimeServer = new Server(httpServer, {
     cors: { origin: config.PUBLIC_ORIGIN, credentials: true },
     maxHttpBufferSize: 16 * 1024,
+    // CORS does not cover WebSocket upgrades: a page on another site could open one with the
+    // viewer's cookie. Browsers always send Origin, so a foreign one is refused at the handshake;
+    // scripts and load tests send none and carry no browser cookie.
+    allowRequest: (req, callback) => {
+      const origin = req.headers.origin;
+      callback(null, !origin || origin === new URL(config.PUBLIC_ORIGIN).origin);
+    },
   });
 
   // The handshake carries the same session cookie as the REST API; visitors connect too.
