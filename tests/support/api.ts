@@ -57,6 +57,11 @@ export class ApiPerson {
     return person;
   }
 
+  /** The session cookies, for a browser context that should start signed in as this person. */
+  browserCookies(): { name: string; value: string; url: string }[] {
+    return [...this.cookies].map(([name, value]) => ({ name, value, url: appOrigin }));
+  }
+
   async call(method: string, path: string, body?: unknown): Promise<Response> {
     const headers: Record<string, string> = { origin: appOrigin };
     if (this.cookies.size)

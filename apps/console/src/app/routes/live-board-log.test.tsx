@@ -71,7 +71,7 @@ describe('Pot board dye log', () => {
     const panel = await dyeLog();
     expect(within(panel).getByText(/planned 50 mL/)).toBeInTheDocument();
 
-    await user.click(within(panel).getByRole('button', { name: 'Log Rockpool teal as planned' }));
+    await user.click(within(panel).getByRole('button', { name: 'Log as planned: Rockpool teal' }));
 
     expect(socket.sent.filter((s) => s.event === 'dyeLog:record').map((s) => s.payload)).toEqual([
       { sessionId, potId: lowTide.potId, recipeLineId: tealLineId },
@@ -104,7 +104,7 @@ describe('Pot board dye log', () => {
       error: { code: 'CONFLICT', message: 'Stop here: the fake keeps no corrections.' },
     }));
     const panel = await dyeLog();
-    await user.click(within(panel).getByRole('button', { name: 'Log Rockpool teal as planned' }));
+    await user.click(within(panel).getByRole('button', { name: 'Log as planned: Rockpool teal' }));
     const entries = await within(panel).findByRole('list', { name: 'Logged for Low tide' });
 
     await user.click(within(entries).getByRole('button', { name: /^Correct Rockpool teal/ }));
@@ -133,7 +133,7 @@ describe('Pot board dye log', () => {
       error: { code: 'CONFLICT', message: 'The Rockpool teal jar has only 20 mL left.' },
     }));
     const panel = await dyeLog();
-    await user.click(within(panel).getByRole('button', { name: 'Log Rockpool teal as planned' }));
+    await user.click(within(panel).getByRole('button', { name: 'Log as planned: Rockpool teal' }));
     expect(await within(panel).findByRole('alert')).toHaveTextContent(
       'The Rockpool teal jar has only 20 mL left.',
     );

@@ -96,7 +96,7 @@ function LineLogger({
         <Button
           size="hand"
           disabled={busy}
-          aria-label={`Log ${line.name} as planned`}
+          aria-label={`Log as planned: ${line.name}`}
           onClick={() => void send()}
         >
           Log as planned

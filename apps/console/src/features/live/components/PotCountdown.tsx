@@ -33,7 +33,7 @@ export function PotCountdown({ timer, nowMs }: { timer: PotTimer; nowMs: number 
         data-testid="countdown"
         className={cx(
           'font-sans text-6xl leading-none font-bold tabular-nums',
-          none ? 'text-wool-300' : done ? 'text-madder-800' : 'text-vat-950',
+          none ? 'text-vat-600' : done ? 'text-madder-800' : 'text-vat-950',
         )}
       >
         {formatCountdown(remainingMs(timer, nowMs))}

@@ -14,12 +14,10 @@ export function LiveTopBar({ program }: { program: LiveProgram }) {
           className="flex min-h-12 min-w-0 flex-1 items-center gap-3 rounded-lg"
         >
           <DyeStripes />
-          <span className="min-w-0 leading-tight">
+          <div className="min-w-0 leading-tight">
             <span className="block truncate text-sm">{dyeAlong.studioName}</span>{' '}
-            <span className="block truncate font-display text-xl font-semibold">
-              {dyeAlong.title}
-            </span>
-          </span>
+            <h1 className="block truncate font-display text-xl font-semibold">{dyeAlong.title}</h1>
+          </div>
         </Link>
         {dyeAlong.streamUrl ? (
           <a
