@@ -27,13 +27,14 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const logger = createLogger(config);
   const database = connectDatabase(config.DATABASE_URL);
   const mailer = createMailer(config);
+  const objectStore = createObjectStore(config);
   const deps: AppDeps = {
     config,
     logger,
     database,
-    objectStore: createObjectStore(config),
+    objectStore,
     mailer,
-    auth: createAuth(config, database.db, mailer),
+    auth: createAuth(config, database.db, mailer, objectStore, logger),
     notifier: createNotifier(),
   };
   const httpServer = createServer(createApp(deps));

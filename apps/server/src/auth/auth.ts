@@ -4,14 +4,26 @@ import { APIError } from 'better-auth/api';
 import { account, session, user, verification } from '@vatside/db/schema';
 import type { Database } from '@vatside/db/client';
 import type { Config } from '../config.ts';
+import type { Logger } from '../logger.ts';
 import { passwordResetMail, verificationMail } from '../mail/auth-mails.ts';
 import type { Mailer } from '../mail/mailer.ts';
+import { sharedPhotoKeysOf } from '../services/account.ts';
 import { soleHostedStudios } from '../services/memberships.ts';
+import type { ObjectStore } from '../storage/object-store.ts';
 
 export const unitSystems = ['us', 'metric'] as const;
 
-export function createAuth(config: Config, db: Database, mailer: Mailer) {
+export function createAuth(
+  config: Config,
+  db: Database,
+  mailer: Mailer,
+  objectStore: ObjectStore,
+  logger: Logger,
+) {
   const attempts = { window: 60, max: config.AUTH_ATTEMPTS_PER_MINUTE };
+  // The rows of a leaving person's skeins go with the account (cascade); their photos' objects
+  // are listed before and removed after, so nothing of theirs stays in the store.
+  const photosOfLeaving = new Map<string, string[]>();
   return betterAuth({
     appName: 'Vatside',
     baseURL: config.PUBLIC_ORIGIN,
@@ -55,6 +67,16 @@ export function createAuth(config: Config, db: Database, mailer: Mailer) {
             throw new APIError('BAD_REQUEST', {
               message: `You are the only host of ${studios.join(', ')}. Make someone else a host first.`,
             });
+          }
+          photosOfLeaving.set(u.id, await sharedPhotoKeysOf(db, u.id));
+        },
+        afterDelete: async (u) => {
+          const keys = photosOfLeaving.get(u.id) ?? [];
+          photosOfLeaving.delete(u.id);
+          for (const key of keys) {
+            await objectStore
+              .delete(key)
+              .catch((err: unknown) => logger.error({ err, key }, 'photo of a deleted account'));
           }
         },
       },

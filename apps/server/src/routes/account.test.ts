@@ -5,6 +5,7 @@ import { studioMembers, user } from '@vatside/db/schema';
 import type { RunningServer } from '../server.ts';
 import { TestClient, signUpVerified } from '../test-support/client.ts';
 import { castStudio } from '../test-support/personas.ts';
+import { makeSharingMonth, share, storedSkeins } from '../test-support/sharing-fixtures.ts';
 import { startTestServer } from '../test-support/test-server.ts';
 
 describe('profile and account deletion', () => {
@@ -62,6 +63,20 @@ describe('profile and account deletion', () => {
       password: viewer.password,
     });
     expect(again.status).toBe(401);
+  });
+
+  it('deleting a sharer removes their skeins’ photos from the object store', async () => {
+    const cast = await castStudio(server, 'delete-sharer');
+    const { dyeAlong } = await makeSharingMonth(cast.people.host.client, cast.slug);
+    const viewer = cast.people.viewer;
+    await share(viewer.client, cast, dyeAlong.id, { photos: 2 });
+    // Two photos, each a web rendition and a thumbnail.
+    expect(await storedSkeins(server, cast.studioId)).toEqual({ objects: 4, rows: 1 });
+    const res = await viewer.client.request('POST', '/api/auth/delete-user', {
+      password: viewer.password,
+    });
+    expect(res.status).toBe(200);
+    expect(await storedSkeins(server, cast.studioId)).toEqual({ objects: 0, rows: 0 });
   });
 
   it('refuses to delete the only host of a studio, keeping everything', async () => {

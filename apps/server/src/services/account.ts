@@ -1,7 +1,7 @@
 import { eq } from '@vatside/db/sql';
 import type { Me, Profile, ProfileUpdate } from '@vatside/contracts/account';
 import type { Database } from '@vatside/db/client';
-import { user } from '@vatside/db/schema';
+import { submissionPhotos, submissions, user } from '@vatside/db/schema';
 import { notFound } from '../http/errors.ts';
 import { membershipsOf } from './memberships.ts';
 
@@ -35,4 +35,14 @@ export async function updateProfile(
     .set({ ...changes, updatedAt: new Date() })
     .where(eq(user.id, userId));
   return profileOf(db, userId);
+}
+
+/** Every stored object of a person's shared skeins (web renditions and thumbnails). */
+export async function sharedPhotoKeysOf(db: Database, userId: string): Promise<string[]> {
+  const rows = await db
+    .select({ webKey: submissionPhotos.webKey, thumbKey: submissionPhotos.thumbKey })
+    .from(submissionPhotos)
+    .innerJoin(submissions, eq(submissions.id, submissionPhotos.submissionId))
+    .where(eq(submissions.sharerUserId, userId));
+  return rows.flatMap((row) => [row.webKey, row.thumbKey]);
 }
