@@ -80,8 +80,9 @@ describe('A dye-along’s page', () => {
     await screen.findByText('1 × 50 g');
     expect(stockItem()).toHaveTextContent('50 mL');
     expect(screen.getByRole('button', { name: '50 g' })).toHaveAttribute('aria-pressed', 'true');
-    expect(JSON.parse(localStorage.getItem('vatside.dye-along-reader') ?? '{}')).toEqual({
-      weightOfGoodsG: 50,
+    // The same kit the live follow-along reads on the day.
+    expect(JSON.parse(localStorage.getItem('vatside.kit') ?? '{}')).toMatchObject({
+      skeinWeightG: 50,
       system: 'metric',
     });
     expect(screen.getByRole('link', { name: 'Sign in to follow' })).toBeVisible();

@@ -1,45 +1,24 @@
-import { unitSystemSchema } from '@vatside/contracts/account';
 import type { MeasureSystem } from '@vatside/dye-kit';
 import { deviceTimeZone } from '@vatside/ui/account/time-zones.ts';
 import { useUpdateProfile } from '@vatside/ui/account/profile-api.ts';
 import { useMe } from '@vatside/ui/session.ts';
-import { useState } from 'react';
-import { z } from 'zod';
+import { useStoredState } from '../../../hooks/use-stored-state.ts';
+import { fallbackKit, kitSchema, kitStorageKey } from '../../../lib/kit.ts';
 import type { Reader } from '../api.ts';
 
-// A visitor's choice stays on this device; a signed-in person's goes to their profile, so it
-// follows them to every studio and every phone.
-const storageKey = 'vatside.dye-along-reader';
-const storedSchema = z.object({
-  weightOfGoodsG: z.number().int().min(5).max(2_000),
-  system: unitSystemSchema,
-});
-type Stored = z.infer<typeof storedSchema>;
-/** Common practice: a 100 g skein, and US kitchen measures until someone says otherwise. */
-const fallback: Stored = { weightOfGoodsG: 100, system: 'us' };
+// A visitor's choice stays on this device, in the same kit the live follow-along reads, so the
+// skein set here is the skein the amounts are worked out for on the day. A signed-in person's
+// goes to their profile, so it follows them to every studio and every phone.
 
-function readStored(): Stored {
-  try {
-    const parsed = storedSchema.safeParse(JSON.parse(localStorage.getItem(storageKey) ?? 'null'));
-    return parsed.success ? parsed.data : fallback;
-  } catch {
-    return fallback;
-  }
-}
-
-function writeStored(value: Stored) {
-  try {
-    localStorage.setItem(storageKey, JSON.stringify(value));
-  } catch {
-    // Private browsing or a full quota: the choice lasts for this visit only.
-  }
-}
+/** The page's amounts are for whole grams within what the server accepts. */
+const pageWeightG = (g: number) => Math.min(2_000, Math.max(5, Math.round(g)));
 
 /** The reader's skein, measures and clock, and a way to change the first two. */
 export function useReader() {
   const { data: me, isPending } = useMe();
   const updateProfile = useUpdateProfile();
-  const [stored, setStored] = useState(readStored);
+  const [storedKit, setKit] = useStoredState(kitStorageKey, kitSchema);
+  const kit = storedKit ?? fallbackKit;
 
   const profile = me?.profile;
   // While the profile saves, show what was asked for rather than the old value.
@@ -50,19 +29,27 @@ export function useReader() {
         system: saving?.unitSystem ?? profile.unitSystem,
         timeZone: profile.timeZone,
       }
-    : { ...stored, timeZone: deviceTimeZone() };
+    : {
+        weightOfGoodsG: pageWeightG(kit.skeinWeightG),
+        system: kit.system,
+        timeZone: deviceTimeZone(),
+      };
 
   const change = (next: { weightOfGoodsG?: number; system?: MeasureSystem }) => {
+    // A kit set on this phone wins on the live screen, so it changes along with the profile.
+    if (!profile || storedKit) {
+      setKit({
+        ...kit,
+        ...(next.weightOfGoodsG !== undefined ? { skeinWeightG: next.weightOfGoodsG } : {}),
+        ...(next.system !== undefined ? { system: next.system } : {}),
+      });
+    }
     if (profile) {
       updateProfile.mutate({
         ...(next.weightOfGoodsG !== undefined ? { defaultSkeinWeightG: next.weightOfGoodsG } : {}),
         ...(next.system !== undefined ? { unitSystem: next.system } : {}),
       });
-      return;
     }
-    const value = { ...stored, ...next };
-    setStored(value);
-    writeStored(value);
   };
 
   return {

@@ -1,6 +1,6 @@
 import { useId, useState, type ReactNode } from 'react';
 import { formatGrams, formatOunces } from '../utils/format.ts';
-import { kitSchema, type Kit } from '../utils/kit.ts';
+import { kitSchema, type Kit } from '../../../lib/kit.ts';
 
 const systemWords = { us: 'US cups and spoons', metric: 'Metric spoons' } as const;
 const dyeKindWords = { stock: 'I use stock solutions', foodColor: 'I use food color' } as const;

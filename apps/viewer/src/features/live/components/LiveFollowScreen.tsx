@@ -14,7 +14,7 @@ import { useTicker } from '../hooks/use-ticker.ts';
 import { useTimerAlarms, type TimerWatch } from '../hooks/use-timer-alarms.ts';
 import { useWakeLock } from '../hooks/use-wake-lock.ts';
 import { scalePot } from '../utils/amounts.ts';
-import { offersBothKinds } from '../utils/kit.ts';
+import { offersBothKinds } from '../../../lib/kit.ts';
 import { FollowStatus } from './FollowStatus.tsx';
 import { HostNotes } from './HostNotes.tsx';
 import { KitSettings } from './KitSettings.tsx';

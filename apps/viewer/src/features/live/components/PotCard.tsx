@@ -6,7 +6,7 @@ import { Button } from '@vatside/ui/Button';
 import { Card } from '@vatside/ui/Card';
 import { useId } from 'react';
 import { amountForLine, stepLineIndex } from '../utils/amounts.ts';
-import type { Kit } from '../utils/kit.ts';
+import type { Kit } from '../../../lib/kit.ts';
 import type { OwnPaceAction, OwnPot } from '../utils/own-pace.ts';
 import { OwnPaceControls } from './OwnPaceControls.tsx';
 import { PotCountdown } from './PotCountdown.tsx';

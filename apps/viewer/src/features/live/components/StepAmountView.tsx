@@ -3,7 +3,7 @@ import type { LineAmount } from '@vatside/dye-kit';
 import { WarningList } from '@vatside/ui/WarningList';
 import { dropsWithYourDropper, type StepAmount } from '../utils/amounts.ts';
 import { formatGrams, formatVolume } from '../utils/format.ts';
-import type { Kit } from '../utils/kit.ts';
+import type { Kit } from '../../../lib/kit.ts';
 
 /** Below this a dropper is easier than a spoon, so the drop count is shown too. */
 const showDropsBelowMl = 1;

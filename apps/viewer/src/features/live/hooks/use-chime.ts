@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useRef } from 'react';
 import { z } from 'zod';
 import { playChime, vibrationPatternMs } from '../utils/chime.ts';
-import { useStoredState } from './use-stored-state.ts';
+import { useStoredState } from '../../../hooks/use-stored-state.ts';
 
 const soundChoiceSchema = z.enum(['on', 'off']);
 export type SoundChoice = z.infer<typeof soundChoiceSchema>;

@@ -1,6 +1,6 @@
 import { useMe } from '@vatside/ui/session.ts';
-import { kitFromProfile, kitSchema, kitStorageKey, type Kit } from '../utils/kit.ts';
-import { useStoredState } from './use-stored-state.ts';
+import { kitFromProfile, kitSchema, kitStorageKey, type Kit } from '../../../lib/kit.ts';
+import { useStoredState } from '../../../hooks/use-stored-state.ts';
 
 /** The viewer's kit: what they set on this phone, else their profile's, else a 100 g skein. */
 export function useKit() {

@@ -8,7 +8,7 @@ import {
   type OwnPace,
   type OwnPaceAction,
 } from '../utils/own-pace.ts';
-import { useStoredState } from './use-stored-state.ts';
+import { useStoredState } from '../../../hooks/use-stored-state.ts';
 
 /** Pots the viewer runs themselves, remembered per session on this phone. */
 export function useOwnPace(sessionId: string) {

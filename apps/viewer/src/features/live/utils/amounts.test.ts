@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { program } from '../../../testing/live-fixtures.ts';
 import { amountForLine, dropsWithYourDropper, scalePot, stepLineIndex } from './amounts.ts';
-import { fallbackKit, type Kit } from './kit.ts';
+import { fallbackKit, type Kit } from '../../../lib/kit.ts';
 
 const [sea, rock] = program.pots as [(typeof program.pots)[0], (typeof program.pots)[0]];
 const kit = (changes: Partial<Kit>): Kit => ({ ...fallbackKit, ...changes });

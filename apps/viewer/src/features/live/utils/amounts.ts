@@ -7,7 +7,7 @@ import {
   type Recipe,
   type ScaledRecipe,
 } from '@vatside/dye-kit';
-import type { Kit } from './kit.ts';
+import type { Kit } from '../../../lib/kit.ts';
 
 /**
  * The program's recipe as dye-kit reads it. The host counted drops with their own dropper: its
