@@ -1,0 +1,280 @@
+import { randomUUID } from 'node:crypto';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ApiPerson, waitForMail } from '../support/api.ts';
+import {
+  appOrigin,
+  launchBrowser,
+  newContext,
+  saveScreenshot,
+  watchPage,
+} from '../support/browser.ts';
+import { encodePng } from '../support/images.ts';
+
+// One whole month in the browser against the real services, in the order the host lives it:
+// plan → announce → go live → share → review → recap → archive → dye again. Each stage saves a
+// screenshot named month-<n>-<stage> beside the other test artefacts. The stages share state
+// and run in order; a failure stops the month where it broke.
+
+let browser: Browser;
+let host: ApiPerson;
+let moderator: ApiPerson;
+let pim: ApiPerson;
+let ada: ApiPerson;
+const slug = `month-${randomUUID().slice(0, 8)}`;
+const studioName = 'Saltgrass Test Dyeworks';
+const title = 'Rock pool month';
+const hostZone = 'America/Halifax';
+const api = (rest: string) => `/api/studios/${slug}${rest}`;
+const problems: string[] = [];
+let dyeAlongId = '';
+
+/** An invented rock pool: teal water over sand, with a coral band. */
+const rockPool = encodePng(120, 80, (x, y) =>
+  y < 40 ? [31, 122, 140] : x < 80 ? [217, 201, 163] : [224, 106, 78],
+);
+
+async function created<T>(res: Response): Promise<T> {
+  if (res.status !== 201) throw new Error(`expected 201, got ${res.status}: ${await res.text()}`);
+  return (await res.json()) as T;
+}
+
+/** A page in a fresh context, signed in through the app's own form when `person` is given. */
+async function openAs(
+  person: ApiPerson | null,
+  viewport: 'phone' | 'desktop',
+  app: 'console' | 'viewer',
+  next: string,
+  options: { timezoneId?: string; context?: BrowserContext } = {},
+): Promise<Page> {
+  const context = options.context ?? (await newContext(browser, viewport, options.timezoneId));
+  const page = await context.newPage();
+  problems.push(...watchPage(page));
+  const root = app === 'console' ? `${appOrigin}/console` : appOrigin;
+  if (!person) {
+    await page.goto(`${root}${next}`);
+    return page;
+  }
+  await page.goto(`${root}/sign-in?next=${encodeURIComponent(next)}`);
+  await page.getByLabel('E-mail').fill(person.email);
+  await page.getByLabel('Password').fill(person.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  return page;
+}
+
+/** A time an hour on, as the host's wall clock reads it (the form takes local time). */
+function inAnHourOnHostClock(): string {
+  const parts = new Intl.DateTimeFormat('en-CA', {
+    timeZone: hostZone,
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+  }).formatToParts(new Date(Date.now() + 60 * 60_000));
+  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
+  return `${get('year')}-${get('month')}-${get('day')}T${get('hour')}:${get('minute')}`;
+}
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  [host, moderator, pim, ada] = await Promise.all([
+    ApiPerson.signUp('month-host', 'Isolde Saltgrass'),
+    ApiPerson.signUp('month-moderator', 'Corra Weedline'),
+    ApiPerson.signUp('month-pim', 'Pim Shellgrove'),
+    ApiPerson.signUp('month-ada', 'Ada Kelpie'),
+  ]);
+});
+
+afterAll(() => browser?.close());
+
+describe('a whole month, start to finish', () => {
+  it('1 · plan: a studio, its shelf, an inspiration image and two colorways', async () => {
+    const page = await openAs(host, 'desktop', 'console', '/studios/new', {
+      timezoneId: hostZone,
+    });
+    await page.getByLabel('Studio name').fill(studioName);
+    await page.getByLabel('Web address').fill(slug);
+    await page.getByRole('button', { name: /start the studio/i }).click();
+    await page.waitForURL(new RegExp(`/console/studios/${slug}`));
+
+    // The shelf and the base come through the API: the workbench test drives those screens.
+    await created(
+      await host.call('POST', api('/bases'), {
+        name: 'Shoreline Sock',
+        fiberContent: [
+          { fiber: 'wool', pct: 75 },
+          { fiber: 'nylon', pct: 25 },
+        ],
+        superwash: true,
+        weightClass: 1,
+        skeinWeightG: 100,
+        skeinLengthM: 400,
+      }),
+    );
+    const dye = await created<{ id: string }>(
+      await host.call('POST', api('/dyes'), {
+        kind: 'acidDyePowder',
+        name: 'Brinewell Blue',
+        swatchHex: '#1f6f78',
+      }),
+    );
+    await created(
+      await host.call('POST', api('/stock-solutions'), {
+        dyeId: dye.id,
+        stockStrengthPct: 1,
+        volumeMadeMl: 1000,
+        madeOn: '2026-11-20',
+      }),
+    );
+    await created(
+      await host.call('POST', api('/pots'), {
+        name: 'Big enamel pot',
+        capacityMl: 12_000,
+        material: 'enamel',
+      }),
+    );
+
+    // The inspiration image and its palette, in the console.
+    await page.goto(`${appOrigin}/console/studios/${slug}/inspiration`);
+    await page.getByLabel('Image file').setInputFiles({
+      name: 'rock-pool.png',
+      mimeType: 'image/png',
+      buffer: rockPool,
+    });
+    await page.getByRole('button', { name: 'Upload and find its palette' }).click();
+    await page.getByRole('article', { name: 'Inspiration image 1' }).waitFor();
+
+    // Two colorways with a recipe line and a short timed step each.
+    for (const [name, depth] of [
+      ['Pool Teal', '1'],
+      ['Sand Shallows', '0.25'],
+    ] as const) {
+      await page.goto(`${appOrigin}/console/studios/${slug}/colorways`);
+      const start = page.getByRole('form', { name: 'Start a colorway' });
+      await start.getByLabel('Colorway name').fill(name);
+      await start.getByLabel('Base').selectOption({ label: 'Shoreline Sock' });
+      await start.getByRole('button', { name: 'Start colorway' }).click();
+      const recipe = page.getByRole('form', { name: 'Colorway recipe' });
+      await recipe.getByRole('button', { name: 'Add a stock solution line' }).click();
+      const line = recipe.getByRole('group', { name: 'Line 1' });
+      await line.getByLabel('Stock solution').selectOption({ index: 1 });
+      await line.getByLabel('Depth of shade').fill(depth);
+      await recipe.getByRole('button', { name: 'Save recipe' }).click();
+      await page.getByRole('region', { name: 'Amounts' }).getByRole('row').nth(1).waitFor();
+      const stepForm = page.getByRole('form', { name: 'Add a step' });
+      await stepForm.getByLabel('What to do').fill('Pour in the stock and stir gently');
+      await stepForm.getByLabel('Amount to measure (optional)').selectOption({ index: 1 });
+      await stepForm.getByLabel('Timer (optional)').fill('0:20');
+      await stepForm.getByLabel('Caution').selectOption('hotBath');
+      await stepForm.getByRole('button', { name: 'Add step' }).click();
+      await page.getByRole('list', { name: 'Run sheet' }).getByText('Pour in the stock').waitFor();
+    }
+    await saveScreenshot(page, 'month-1-plan');
+    await page.context().close();
+  }, 180_000);
+
+  it('2 · announce: followers are e-mailed and the calendar file reads right', async () => {
+    for (const viewer of [pim, ada]) {
+      const res = await viewer.call('PUT', api('/follow'), { mailOptIn: true });
+      expect(res.status).toBe(200);
+    }
+    const page = await openAs(host, 'desktop', 'console', `/studios/${slug}/dye-alongs/new`, {
+      timezoneId: hostZone,
+    });
+    await page.getByLabel('Title').fill(title);
+    await page.getByLabel('Starts at (on your clock)').fill(inAnHourOnHostClock());
+    await page.getByLabel('Time zone', { exact: true }).selectOption(hostZone);
+    await page.getByLabel('Pool Teal').check();
+    await page.getByLabel('Sand Shallows').check();
+    await page
+      .getByRole('group', { name: 'Inspiration image' })
+      .getByLabel(/Image 1/)
+      .check();
+    await page.getByRole('button', { name: 'Save as draft' }).click();
+    await page.getByRole('heading', { name: title, level: 2 }).waitFor();
+    dyeAlongId = page.url().split('/').at(-1) ?? '';
+    await page.getByRole('button', { name: 'Announce and e-mail followers' }).click();
+    await page.getByRole('button', { name: 'Yes, announce and send the e-mails' }).click();
+    await page.getByText('Its page is public and followers have been told.').waitFor();
+    await saveScreenshot(page, 'month-2-announce');
+
+    const mail = await waitForMail(pim.email, new RegExp(`dye-along: ${title}`), 30_000);
+    expect(mail.text).toContain('Brinewell Blue');
+    // RFC 5545: a VEVENT with the title as SUMMARY and the start in UTC.
+    const ics = await (await pim.call('GET', api(`/dye-alongs/${dyeAlongId}/calendar.ics`))).text();
+    expect(ics).toMatch(/^BEGIN:VCALENDAR/);
+    expect(ics).toContain('BEGIN:VEVENT');
+    expect(ics).toContain(`SUMMARY:${title}`);
+    expect(ics).toMatch(/DTSTART:\d{8}T\d{6}Z/);
+    await page.context().close();
+  }, 120_000);
+
+  it('3 · go live: two phones follow, one with a wrong clock, one that drops off', async () => {
+    const board = await openAs(host, 'desktop', 'console', `/studios/${slug}/live`);
+    const month = board.getByRole('article', { name: title });
+    await month.getByRole('button', { name: 'Go live' }).click();
+    const pot = (n: number) => board.getByRole('region', { name: new RegExp(`^Pot ${n} ·`) });
+    await pot(1).waitFor();
+    const viewerLink = await board
+      .getByRole('region', { name: 'Follow-along link' })
+      .getByText(`${appOrigin}/live/`)
+      .textContent();
+
+    // Pim's phone runs seven minutes slow; only the server's clock keeps the timer right.
+    const slowContext = await newContext(browser, 'phone');
+    await slowContext.clock.install({ time: Date.now() - 7 * 60_000 });
+    const slow = await openAs(pim, 'phone', 'viewer', new URL(viewerLink!).pathname, {
+      context: slowContext,
+    });
+    const flaky = await openAs(ada, 'phone', 'viewer', new URL(viewerLink!).pathname);
+    for (const phone of [slow, flaky]) {
+      await phone
+        .getByRole('region', { name: 'Pool Teal' })
+        .getByText('Pour in the stock')
+        .waitFor();
+    }
+
+    await pot(1).getByRole('button', { name: 'Start timer' }).click();
+    const timer = slow.getByRole('timer', { name: 'Pool Teal timer' });
+    const shownSeconds = async () => {
+      const [m = '0', sec = '0'] = (
+        (await timer.textContent())?.match(/\d+:\d\d/)?.[0] ?? ''
+      ).split(':');
+      return Number(m) * 60 + Number(sec);
+    };
+    await expect.poll(shownSeconds, { timeout: 15_000 }).toBeLessThanOrEqual(20);
+    await expect.poll(shownSeconds, { timeout: 15_000 }).toBeGreaterThan(5);
+    await saveScreenshot(slow, 'month-3-live-phone');
+
+    // Ada drops off; the host pauses meanwhile; she comes back to the paused timer.
+    await flaky.context().setOffline(true);
+    await flaky.getByText('Offline — reconnecting…').waitFor({ timeout: 50_000 });
+    await pot(1).getByRole('button', { name: 'Pause timer' }).click();
+    await pot(1).getByText('Paused').waitFor();
+    await flaky.context().setOffline(false);
+    await flaky.getByRole('region', { name: 'Pool Teal' }).getByText('Paused').waitFor({
+      timeout: 20_000,
+    });
+
+    // What actually went in: a little more teal than planned, the sand as planned.
+    const teal = board.getByRole('region', { name: 'Dye log · Pool Teal' });
+    await teal.getByRole('button', { name: /^Adjust / }).click();
+    await teal.getByLabel(/^Amount of .* that went in \(mL\)$/).fill('110');
+    await teal.getByRole('button', { name: 'Log', exact: true }).click();
+    await teal.getByRole('list', { name: 'Logged for Pool Teal' }).getByText('adjusted').waitFor();
+    const sand = board.getByRole('region', { name: 'Dye log · Sand Shallows' });
+    await sand.getByRole('button', { name: /^Log as planned/ }).click();
+    await sand
+      .getByRole('list', { name: 'Logged for Sand Shallows' })
+      .getByText('as planned')
+      .waitFor();
+    await saveScreenshot(board, 'month-3-live-board');
+
+    await board.getByRole('button', { name: 'End the live session…' }).click();
+    await board.getByRole('button', { name: 'Yes, end the live session' }).click();
+    await slow.getByText(/ended/i).first().waitFor({ timeout: 20_000 });
+    for (const page of [board, slow, flaky]) await page.context().close();
+  }, 180_000);
+});
