@@ -34,9 +34,10 @@ export function SkeinCard({ slug, skein }: { slug: string; skein: Submission }) 
     <Card as="li" aria-labelledby={titleId} className="space-y-4">
       <div className="space-y-1">
         <h2 id={titleId} className="font-display text-2xl font-semibold">
-          {skein.colorway ? skein.colorway.name : skein.baseName}
+          {skein.baseName}
         </h2>
         <p className="text-vat-800">
+          {skein.colorway ? `${skein.colorway.name} · ` : ''}
           {skein.dyeAlong.title} · shared {shortDate(skein.createdAt)}
         </p>
       </div>
