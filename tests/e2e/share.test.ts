@@ -64,7 +64,9 @@ beforeAll(async () => {
     { to: 'announced' },
   );
   expect(announced.status).toBe(200);
-  expect((await viewer.call('PUT', `/api/studios/${slug}/follow`, { mailOptIn: false })).status).toBe(200);
+  expect(
+    (await viewer.call('PUT', `/api/studios/${slug}/follow`, { mailOptIn: false })).status,
+  ).toBe(200);
 });
 
 afterAll(() => browser?.close());
@@ -158,7 +160,9 @@ describe('sharing a skein from a phone', () => {
 
     const left = await viewer.call('GET', `/api/studios/${slug}/my-submissions`);
     const list = (await left.json()) as { items: { baseName: string; status: string }[] };
-    expect(list.items).toEqual([expect.objectContaining({ baseName: 'Shoreline Sock', status: 'waiting' })]);
+    expect(list.items).toEqual([
+      expect.objectContaining({ baseName: 'Shoreline Sock', status: 'waiting' }),
+    ]);
     expect(problems).toEqual([]);
     await context.close();
   });

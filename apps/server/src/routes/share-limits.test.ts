@@ -63,11 +63,7 @@ describe('share limits and storage use', () => {
     viewerSkeins.push(await share(cast.clients.viewer, cast, month.dyeAlong.id, { photos: 2 }));
     viewerSkeins.push(await share(cast.clients.viewer, cast, month.dyeAlong.id));
     const photo = await skeinPhoto('#2d6f86');
-    const { res, error } = await refused(
-      cast.clients.viewer,
-      shareForm([photo], baseDetails),
-      429,
-    );
+    const { res, error } = await refused(cast.clients.viewer, shareForm([photo], baseDetails), 429);
     expect(error.code).toBe('RATE_LIMITED');
     expect(error.message).toMatch(/shared 2 skeins in the last hour/);
     const retryAfterS = Number(res.headers.get('retry-after'));
@@ -126,9 +122,10 @@ describe('share limits and storage use', () => {
     expect(storage.workbenchImages).toEqual({ bytes: inspirationBytes, images: 1 });
 
     const viewerPhotos = viewerSkeins.flatMap((s) => s.photos);
-    const viewerBytes = (
-      await Promise.all(viewerPhotos.map((p) => sizeOf(p.webUrl)))
-    ).reduce((a, b) => a + b, 0);
+    const viewerBytes = (await Promise.all(viewerPhotos.map((p) => sizeOf(p.webUrl)))).reduce(
+      (a, b) => a + b,
+      0,
+    );
     // Viewer 2 skeins (3 photos), moderator 1, host 1.
     expect(storage.skeinPhotos.skeins).toBe(4);
     expect(storage.skeinPhotos.photos).toBe(5);

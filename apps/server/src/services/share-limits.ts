@@ -65,7 +65,10 @@ export async function checkShareLimits(
     );
   }
   const used = await sharerBytes(db, who.studioId, who.sharerId);
-  const full = incomingBytes === 0 ? used >= limits.storageQuotaBytes : used + incomingBytes > limits.storageQuotaBytes;
+  const full =
+    incomingBytes === 0
+      ? used >= limits.storageQuotaBytes
+      : used + incomingBytes > limits.storageQuotaBytes;
   if (full) {
     const left = Math.max(0, limits.storageQuotaBytes - used);
     throw new HttpError(

@@ -34,12 +34,15 @@ describe('Storage on the members page', () => {
     expect(panel).toHaveTextContent('Workbench images (4 images)3 MB');
     expect(panel).toHaveTextContent('Shared skein photos (5 photos of 3 skeins)1.5 MB');
     expect(panel).toHaveTextContent('In all4.5 MB');
-    expect(panel).toHaveTextContent('Each member may keep 100 MB of skein photos here and share 12 skeins an hour');
+    expect(panel).toHaveTextContent(
+      'Each member may keep 100 MB of skein photos here and share 12 skeins an hour',
+    );
     const top = within(panel).getByRole('region', { name: 'Most room taken by' });
-    expect(within(top).getAllByRole('listitem').map((r) => r.textContent)).toEqual([
-      'Ada Quill 2 skeins, 4 photos1 MB',
-      'Ito Brack 1 skein, 1 photo512 KB',
-    ]);
+    expect(
+      within(top)
+        .getAllByRole('listitem')
+        .map((r) => r.textContent),
+    ).toEqual(['Ada Quill 2 skeins, 4 photos1 MB', 'Ito Brack 1 skein, 1 photo512 KB']);
   });
 
   it('is not there for a moderator, who is never sent to ask', async () => {

@@ -27,8 +27,19 @@ function serveMySkeins() {
       status: 'needsChanges',
       reason: 'The photo is a little blurry; a sharper one would show the colors.',
     }),
-    skein({ id: ids.featured, status: 'featured', consentToFeature: true, baseName: 'Kelp Fingering' }),
-    skein({ id: ids.declined, colorway: null, baseName: 'Sand Worsted', status: 'rejected', reason: 'Not yarn from this dye-along.' }),
+    skein({
+      id: ids.featured,
+      status: 'featured',
+      consentToFeature: true,
+      baseName: 'Kelp Fingering',
+    }),
+    skein({
+      id: ids.declined,
+      colorway: null,
+      baseName: 'Sand Worsted',
+      status: 'rejected',
+      reason: 'Not yarn from this dye-along.',
+    }),
   ];
   const sent: { method: string; id: string; body: unknown }[] = [];
   const one = `${mySkeinsApi}/:id`;
@@ -86,8 +97,12 @@ describe('My skeins', () => {
     expect(card('Sand Worsted')).toHaveTextContent('Not yarn from this dye-along.');
     // Only a skein still waiting or sent back can be changed.
     expect(within(card('Harbor DK')).getByRole('button', { name: /Change details/ })).toBeVisible();
-    expect(within(card('Sand Worsted')).queryByRole('button', { name: /Change details/ })).toBeNull();
-    expect(within(card('Harbor DK')).getByRole('img', { name: 'Photo 1 of this skein' })).toBeVisible();
+    expect(
+      within(card('Sand Worsted')).queryByRole('button', { name: /Change details/ }),
+    ).toBeNull();
+    expect(
+      within(card('Harbor DK')).getByRole('img', { name: 'Photo 1 of this skein' }),
+    ).toBeVisible();
   });
 
   it('edits a skein sent back; it goes back to waiting', async () => {
@@ -119,10 +134,12 @@ describe('My skeins', () => {
     await screen.findByRole('listitem', { name: 'Kelp Fingering' }, firstLoad);
     const featured = card('Kelp Fingering');
     expect(featured).toHaveTextContent('Featured');
-    expect(featured).toHaveTextContent('Turning this off takes the skein out of the recap');
+    expect(featured).toHaveTextContent('It is in the recap now. Turning this off takes it out');
     await user.click(within(featured).getByRole('switch', { name: /feature it in the recap/ }));
     expect(await within(featured).findByText('Approved')).toBeVisible();
-    expect(within(featured).getByRole('switch', { name: /feature it in the recap/ })).not.toBeChecked();
+    expect(
+      within(featured).getByRole('switch', { name: /feature it in the recap/ }),
+    ).not.toBeChecked();
     expect(sent).toEqual([{ method: 'PUT', id: ids.featured, body: { consentToFeature: false } }]);
   });
 

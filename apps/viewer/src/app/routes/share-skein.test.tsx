@@ -14,7 +14,8 @@ import {
 } from '../../testing/sharing-fixtures.ts';
 
 const firstLoad = { timeout: 5_000 };
-const photoFile = () => new File([new Uint8Array([0xff, 0xd8, 0xff, 0xe0])], 'skein.jpg', { type: 'image/jpeg' });
+const photoFile = () =>
+  new File([new Uint8Array([0xff, 0xd8, 0xff, 0xe0])], 'skein.jpg', { type: 'image/jpeg' });
 
 /** The studio with Ada following, the month open for sharing; records each share sent. */
 function serveMember() {
@@ -31,7 +32,10 @@ function serveMember() {
 
 beforeEach(() => {
   // jsdom has no object URLs; the preview only needs a stand-in address.
-  vi.stubGlobal('URL', Object.assign(URL, { createObjectURL: () => 'blob:skein', revokeObjectURL: () => {} }));
+  vi.stubGlobal(
+    'URL',
+    Object.assign(URL, { createObjectURL: () => 'blob:skein', revokeObjectURL: () => {} }),
+  );
 });
 afterEach(() => vi.unstubAllGlobals());
 
@@ -57,7 +61,12 @@ describe('Share your skein', () => {
   it('says what is missing, sends nothing, and keeps consent off until turned on', async () => {
     serveMember();
     let posts = 0;
-    server.use(http.post(shareApi, () => { posts += 1; return HttpResponse.json({}, { status: 500 }); }));
+    server.use(
+      http.post(shareApi, () => {
+        posts += 1;
+        return HttpResponse.json({}, { status: 500 });
+      }),
+    );
     const { user } = renderApp(sharePath);
     await screen.findByRole('heading', { name: 'Share your skein' }, firstLoad);
 
@@ -86,7 +95,9 @@ describe('Share your skein', () => {
         details = JSON.parse(String(form.get('details')));
         photos = form.getAll('photos').length;
         await delay(300);
-        return HttpResponse.json(skein({ id: 'a1b2c3d4-0000-4000-8000-000000000001' }), { status: 201 });
+        return HttpResponse.json(skein({ id: 'a1b2c3d4-0000-4000-8000-000000000001' }), {
+          status: 201,
+        });
       }),
     );
     const { user } = renderApp(sharePath);
@@ -132,7 +143,8 @@ describe('Share your skein', () => {
           {
             error: {
               code: 'QUOTA_EXCEEDED',
-              message: 'Your skein photos in this studio use 99.0 MB of the 100.0 MB each member may keep.',
+              message:
+                'Your skein photos in this studio use 99.0 MB of the 100.0 MB each member may keep.',
             },
           },
           { status: 413 },
@@ -146,7 +158,9 @@ describe('Share your skein', () => {
     await user.click(screen.getByRole('switch', { name: /feature it in the recap/ }));
     await user.click(screen.getByRole('button', { name: 'Share my skein' }));
 
-    expect(await screen.findByRole('alert')).toHaveTextContent(/99.0 MB of the 100.0 MB.*Nothing you added is lost/);
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      /99.0 MB of the 100.0 MB.*Nothing you added is lost/,
+    );
     expect(screen.getByLabelText('Yarn base')).toHaveValue('Shoreline Sock');
     expect(screen.getByRole('switch', { name: /feature it in the recap/ })).toBeChecked();
     expect(screen.getByRole('group', { name: /Yarn area on Photo 1/ })).toBeVisible();

@@ -32,7 +32,8 @@ export const sharingDyeAlongQueryOptions = (slug: string, dyeAlongId: string) =>
 export const mySkeinsQueryOptions = (slug: string) =>
   queryOptions({
     queryKey: ['my-skeins', slug],
-    queryFn: ({ signal }) => apiGet(`${minePath(slug)}?limit=100`, submissionListSchema, { signal }),
+    queryFn: ({ signal }) =>
+      apiGet(`${minePath(slug)}?limit=100`, submissionListSchema, { signal }),
   });
 
 export interface ShareRequest {
@@ -56,7 +57,8 @@ export function useShareSkein(slug: string, dyeAlongId: string) {
         onProgress,
       );
     },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: mySkeinsQueryOptions(slug).queryKey }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: mySkeinsQueryOptions(slug).queryKey }),
   });
 }
 
@@ -65,7 +67,8 @@ function useSkeinChange<V, R>(slug: string, send: (vars: V) => Promise<R>) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: send,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: mySkeinsQueryOptions(slug).queryKey }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: mySkeinsQueryOptions(slug).queryKey }),
   });
 }
 
@@ -76,8 +79,10 @@ export function useUpdateSkein(slug: string) {
 }
 
 export function useSetConsent(slug: string) {
-  return useSkeinChange(slug, ({ id, consentToFeature }: { id: string; consentToFeature: boolean }) =>
-    apiSend('PUT', `${onePath(slug, id)}/consent`, { consentToFeature }, submissionSchema),
+  return useSkeinChange(
+    slug,
+    ({ id, consentToFeature }: { id: string; consentToFeature: boolean }) =>
+      apiSend('PUT', `${onePath(slug, id)}/consent`, { consentToFeature }, submissionSchema),
   );
 }
 

@@ -28,7 +28,9 @@ export const draftOf = (skein: Submission): DetailsDraft => ({
   notes: skein.notes,
 });
 
-export type DetailErrors = Partial<Record<'baseName' | 'fiberContent' | 'dyesUsed' | 'notes', string>>;
+export type DetailErrors = Partial<
+  Record<'baseName' | 'fiberContent' | 'dyesUsed' | 'notes', string>
+>;
 
 const splitDyes = (text: string) =>
   text

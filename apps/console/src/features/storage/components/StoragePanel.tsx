@@ -41,8 +41,8 @@ export function StoragePanel({ slug }: { slug: string }) {
           </dl>
           <p className="text-sm text-vat-800">
             Each member may keep {formatBytes(data.limits.storageQuotaBytes)} of skein photos here
-            and share {plural(data.limits.sharesPerHour, 'skein', 'skeins')} an hour. Sizes are
-            the stored photos; small previews are not counted.
+            and share {plural(data.limits.sharesPerHour, 'skein', 'skeins')} an hour. Sizes are the
+            stored photos; small previews are not counted.
           </p>
           {data.topSharers.length > 0 ? (
             <section aria-labelledby="top-sharers-title" className="space-y-2">
@@ -51,7 +51,10 @@ export function StoragePanel({ slug }: { slug: string }) {
               </h3>
               <ol className="divide-y divide-wool-200">
                 {data.topSharers.map((sharer) => (
-                  <li key={sharer.userId} className="flex items-baseline justify-between gap-4 py-1">
+                  <li
+                    key={sharer.userId}
+                    className="flex items-baseline justify-between gap-4 py-1"
+                  >
                     <span>
                       <span className="font-bold">{sharer.name}</span>{' '}
                       <span className="text-sm text-vat-800">

@@ -8,10 +8,13 @@ export function ConsentSwitch({
   checked,
   disabled = false,
   onChange,
+  shared = false,
 }: {
   checked: boolean;
   disabled?: boolean;
   onChange: (checked: boolean) => void;
+  /** On a skein already shared (My skeins), rather than on the share form. */
+  shared?: boolean;
 }) {
   const id = useId();
   const explainId = `${id}-explain`;
@@ -43,9 +46,11 @@ export function ConsentSwitch({
         />
       </label>
       <p id={explainId} className="text-sm text-vat-800">
-        Yes means the host may show your photos, your name and your notes on screen in the
-        month’s recap, which may be recorded. You can turn it off at any time in My skeins; the
-        skein then leaves the recap.
+        Yes means the host may show your photos, your name and your notes on screen in the month’s
+        recap, which may be recorded.{' '}
+        {shared
+          ? 'Turning it off takes the skein out of the recap.'
+          : 'You can turn it off at any time in My skeins; the skein then leaves the recap.'}
       </p>
     </div>
   );

@@ -45,7 +45,11 @@ export function DetailsFields({
         error={errors.baseName}
         onChange={(e) => set({ baseName: e.target.value })}
       />
-      <FiberRows rows={draft.fibers} onChange={(fibers) => set({ fibers })} error={errors.fiberContent} />
+      <FiberRows
+        rows={draft.fibers}
+        onChange={(fibers) => set({ fibers })}
+        error={errors.fiberContent}
+      />
       <TextField
         label="Dyes used"
         hint="Separate them with commas, e.g. “teal gel, blue liquid, vinegar”."
@@ -54,7 +58,11 @@ export function DetailsFields({
         error={errors.dyesUsed}
         onChange={(e) => set({ dyes: e.target.value })}
       />
-      <FieldFrame label="Notes" hint="Optional: what you did, what surprised you." error={errors.notes}>
+      <FieldFrame
+        label="Notes"
+        hint="Optional: what you did, what surprised you."
+        error={errors.notes}
+      >
         {(control) => (
           <textarea
             {...control}

@@ -43,12 +43,13 @@ export function PhotoPicker({
     <fieldset className="space-y-4" aria-describedby={`${id}-tips`}>
       <legend className="font-display text-2xl font-semibold">Photos</legend>
       <p className="text-vat-800">
-        One to {MAX_SHARE_PHOTOS} photos of the skein. {photos.length > 0 ? `${photos.length} added.` : ''}
+        One to {MAX_SHARE_PHOTOS} photos of the skein.{' '}
+        {photos.length > 0 ? `${photos.length} added.` : ''}
       </p>
       {room > 0 ? (
         <div className="grid gap-3 sm:grid-cols-2">
           <label htmlFor={`${id}-camera`} className={buttonClass('primary', 'hand')}>
-            <span aria-hidden="true">📷</span> Take a photo
+            Take a photo
           </label>
           <input
             id={`${id}-camera`}
@@ -75,7 +76,10 @@ export function PhotoPicker({
       ) : (
         <p className="font-bold">That is {MAX_SHARE_PHOTOS} photos, the most one share holds.</p>
       )}
-      <div id={`${id}-tips`} className="rounded-xl border-2 border-marigold-300 bg-marigold-100 p-4">
+      <div
+        id={`${id}-tips`}
+        className="rounded-xl border-2 border-marigold-300 bg-marigold-100 p-4"
+      >
         <p className="font-bold">For true colors</p>
         <ul className="list-disc pl-5">
           {PHOTO_TIPS.map((tip) => (
@@ -91,8 +95,8 @@ export function PhotoPicker({
       ) : null}
       {photos.length > 0 ? (
         <p className="text-vat-800">
-          Put the box over the yarn on each photo: drag it or its round corners, or use the
-          buttons. Only the yarn inside the box is compared with the inspiration.
+          Put the box over the yarn on each photo: drag it or its round corners, or use the buttons.
+          Only the yarn inside the box is compared with the inspiration.
         </p>
       ) : null}
       <ol className="space-y-6">

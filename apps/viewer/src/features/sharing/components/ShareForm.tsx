@@ -1,8 +1,4 @@
-import {
-  MAX_SHARE_PHOTOS,
-  type Submission,
-  type YarnCrop,
-} from '@vatside/contracts/submissions';
+import { MAX_SHARE_PHOTOS, type Submission, type YarnCrop } from '@vatside/contracts/submissions';
 import { ApiError } from '@vatside/ui/api-client.ts';
 import { Button } from '@vatside/ui/Button';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
@@ -18,7 +14,11 @@ import { UploadProgress } from './UploadProgress.tsx';
 /** The server's largest photo (UPLOAD_MAX_BYTES); checked here first to save a slow upload. */
 const MAX_PHOTO_BYTES = 20 * 1024 * 1024;
 
-type Errors = DetailErrors & { colorwayId?: string; photos?: string; photoAt: Record<number, string> };
+type Errors = DetailErrors & {
+  colorwayId?: string;
+  photos?: string;
+  photoAt: Record<number, string>;
+};
 const noErrors: Errors = { photoAt: {} };
 
 /** Server field names ("baseName", "photos.1", …) put beside their fields. */
@@ -80,8 +80,12 @@ export function ShareForm({
     });
     setPhotos([...photos, ...added]);
     const problems = [
-      tooBig.length ? `${tooBig.length === 1 ? 'A photo is' : 'Some photos are'} over 20 MB; pick a smaller one.` : '',
-      files.length - tooBig.length > room ? `Only ${MAX_SHARE_PHOTOS} photos fit in one share.` : '',
+      tooBig.length
+        ? `${tooBig.length === 1 ? 'A photo is' : 'Some photos are'} over 20 MB; pick a smaller one.`
+        : '',
+      files.length - tooBig.length > room
+        ? `Only ${MAX_SHARE_PHOTOS} photos fit in one share.`
+        : '',
     ].filter(Boolean);
     setErrors({ ...errors, photos: problems.join(' ') || undefined, photoAt: {} });
   }
@@ -141,12 +145,14 @@ export function ShareForm({
         {share.error ? (
           <FormAlert>
             {share.error.message}
-            {share.error instanceof ApiError && share.error.status === 429 ? null : ' Nothing you added is lost.'}
+            {share.error instanceof ApiError && share.error.status === 429
+              ? null
+              : ' Nothing you added is lost.'}
           </FormAlert>
         ) : problemCount > 0 ? (
           <FormAlert>
-            {problemCount === 1 ? 'One thing needs a look' : `${problemCount} things need a look`} before
-            sharing; each is marked below.
+            {problemCount === 1 ? 'One thing needs a look' : `${problemCount} things need a look`}{' '}
+            before sharing; each is marked below.
           </FormAlert>
         ) : null}
       </div>

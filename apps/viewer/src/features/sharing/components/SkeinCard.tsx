@@ -67,13 +67,14 @@ export function SkeinCard({ slug, skein }: { slug: string; skein: Submission }) 
       ) : (
         <>
           <ConsentSwitch
+            shared
             checked={skein.consentToFeature}
             disabled={consent.isPending}
             onChange={(consentToFeature) => consent.mutate({ id: skein.id, consentToFeature })}
           />
           {skein.status === 'featured' && skein.consentToFeature ? (
             <p className="text-sm font-bold">
-              Turning this off takes the skein out of the recap; it stays in the gallery.
+              It is in the recap now. Turning this off takes it out; it stays in the gallery.
             </p>
           ) : null}
           {editable ? (
@@ -88,8 +89,8 @@ export function SkeinCard({ slug, skein }: { slug: string; skein: Submission }) 
               className="space-y-3 rounded-xl border-2 border-madder-700 bg-madder-100 p-4"
             >
               <p className="font-bold text-madder-800">
-                Withdraw this skein? Its photos and details are removed from Vatside everywhere:
-                the gallery, the recap and the moderators’ queue. This cannot be undone.
+                Withdraw this skein? Its photos and details are removed from Vatside everywhere: the
+                gallery, the recap and the moderators’ queue. This cannot be undone.
               </p>
               <div className="grid gap-3 sm:grid-cols-2">
                 <Button

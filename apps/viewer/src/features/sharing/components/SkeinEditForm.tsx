@@ -48,7 +48,9 @@ export function SkeinEditForm({
 
   return (
     <form noValidate onSubmit={submit} className="space-y-5" aria-label="Change this skein">
-      {update.error ? <FormAlert>{update.error.message} Your changes are still here.</FormAlert> : null}
+      {update.error ? (
+        <FormAlert>{update.error.message} Your changes are still here.</FormAlert>
+      ) : null}
       {skein.photos.map((photo) => (
         <div key={photo.id} className="space-y-1">
           <p className="font-bold">Yarn area on photo {photo.position}</p>

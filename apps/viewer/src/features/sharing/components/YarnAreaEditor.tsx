@@ -64,6 +64,13 @@ export function YarnAreaEditor({
     onChange(event.shiftKey ? resizeCrop(crop, 'bottomRight', dx, dy) : moveCrop(crop, dx, dy));
   }
 
+  const placed = {
+    left: pct(crop.x),
+    top: pct(crop.y),
+    width: pct(crop.width),
+    height: pct(crop.height),
+  };
+
   const handle = (corner: Corner) => (
     <span
       aria-hidden="true"
@@ -73,7 +80,9 @@ export function YarnAreaEditor({
       onPointerCancel={end}
       className={[
         'absolute size-11 touch-none rounded-full border-4 border-white bg-marigold-500 shadow',
-        corner === 'topLeft' ? '-top-5 -left-5 cursor-nwse-resize' : '-right-5 -bottom-5 cursor-nwse-resize',
+        corner === 'topLeft'
+          ? '-top-5 -left-5 cursor-nwse-resize'
+          : '-right-5 -bottom-5 cursor-nwse-resize',
       ].join(' ')}
     />
   );
@@ -81,7 +90,19 @@ export function YarnAreaEditor({
   return (
     <div className="space-y-3">
       <div ref={frame} className="relative mx-5 my-5 select-none">
-        <img src={src} alt={`${label}, with the yarn area marked`} className="block h-auto w-full rounded-lg" draggable={false} />
+        <img
+          src={src}
+          alt={`${label}, with the yarn area marked`}
+          className="block h-auto w-full rounded-lg"
+          draggable={false}
+        />
+        {/* Dims what lies outside the box, clipped to the photo. */}
+        <div
+          aria-hidden="true"
+          className="pointer-events-none absolute inset-0 overflow-hidden rounded-lg"
+        >
+          <div className="absolute shadow-[0_0_0_9999px_rgb(10_31_43/0.55)]" style={placed} />
+        </div>
         <div
           role="group"
           tabIndex={0}
@@ -92,21 +113,33 @@ export function YarnAreaEditor({
           onPointerMove={follow}
           onPointerUp={end}
           onPointerCancel={end}
-          className="absolute cursor-move touch-none rounded-sm border-4 border-marigold-300 shadow-[0_0_0_9999px_rgb(10_31_43/0.45)] outline-offset-4"
-          style={{ left: pct(crop.x), top: pct(crop.y), width: pct(crop.width), height: pct(crop.height) }}
+          className="absolute cursor-move touch-none rounded-sm border-4 border-marigold-300 outline-offset-4"
+          style={placed}
         >
           {handle('topLeft')}
           {handle('bottomRight')}
         </div>
       </div>
       <div className="grid grid-cols-2 gap-2">
-        <Button variant="secondary" onClick={() => onChange(scaleCrop(crop, 1 / 1.2))} aria-label={`Smaller yarn area on ${label}`}>
+        <Button
+          variant="secondary"
+          onClick={() => onChange(scaleCrop(crop, 1 / 1.2))}
+          aria-label={`Smaller yarn area on ${label}`}
+        >
           Smaller
         </Button>
-        <Button variant="secondary" onClick={() => onChange(scaleCrop(crop, 1.2))} aria-label={`Bigger yarn area on ${label}`}>
+        <Button
+          variant="secondary"
+          onClick={() => onChange(scaleCrop(crop, 1.2))}
+          aria-label={`Bigger yarn area on ${label}`}
+        >
           Bigger
         </Button>
-        <Button variant="secondary" onClick={() => onChange(MIDDLE_AREA)} aria-label={`Yarn in the middle of ${label}`}>
+        <Button
+          variant="secondary"
+          onClick={() => onChange(MIDDLE_AREA)}
+          aria-label={`Yarn in the middle of ${label}`}
+        >
           Middle
         </Button>
         <Button
