@@ -15,6 +15,7 @@ import {
 // withdraws another share.
 
 let browser: Browser;
+let host: ApiPerson;
 let viewer: ApiPerson;
 let dyeAlongId = '';
 const slug = `e2e-share-${randomUUID().slice(0, 8)}`;
@@ -27,10 +28,11 @@ async function created<T>(res: Response): Promise<T> {
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const [host, follower] = await Promise.all([
+  const [hostPerson, follower] = await Promise.all([
     ApiPerson.signUp('e2e-share-host', 'Isolde Wrackline'),
     ApiPerson.signUp('e2e-share-viewer', 'Pim Shellgrove'),
   ]);
+  host = hostPerson;
   viewer = follower;
   await created(
     await host.call('POST', '/api/studios', {
@@ -94,8 +96,13 @@ describe('sharing a skein from a phone', () => {
     const problems = watchPage(page);
     const share = `/s/${slug}/dye-alongs/${dyeAlongId}/share`;
 
-    // Not signed in yet: the share page leads to sign-in and back.
-    await page.goto(`${appOrigin}${share}`);
+    // Not signed in yet: the dye-along's page leads to sharing, which asks to sign in first.
+    await page.goto(`${appOrigin}/s/${slug}/dye-alongs/${dyeAlongId}`);
+    await page.getByText('Sharing is open.').waitFor();
+    await saveScreenshot(page, 'dye-along-share-link-phone');
+    await page.getByRole('link', { name: 'Share your skein' }).click();
+    await page.waitForURL(/\/sign-in\?/);
+    expect(new URL(page.url()).searchParams.get('next')).toBe(share);
     await page.getByLabel('E-mail').fill(viewer.email);
     await page.getByLabel('Password').fill(viewer.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
@@ -163,6 +170,23 @@ describe('sharing a skein from a phone', () => {
     expect(list.items).toEqual([
       expect.objectContaining({ baseName: 'Shoreline Sock', status: 'waiting' }),
     ]);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it('shows the host the studio’s storage beside its members', async () => {
+    const context = await newContext(browser, 'desktop');
+    const page = await context.newPage();
+    const problems = watchPage(page);
+    const next = `/studios/${slug}/members`;
+    await page.goto(`${appOrigin}/console/sign-in?next=${encodeURIComponent(next)}`);
+    await page.getByLabel('E-mail').fill(host.email);
+    await page.getByLabel('Password').fill(host.password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    const panel = page.getByRole('region', { name: 'Storage' });
+    await panel.getByText('Shared skein photos (1 photo of 1 skein)').waitFor();
+    await panel.getByText('Pim Shellgrove').waitFor();
+    await saveScreenshot(page, 'console-storage-desktop');
     expect(problems).toEqual([]);
     await context.close();
   });
