@@ -60,6 +60,9 @@ async function startServerProcess(): Promise<{ child: ChildProcess; url: string 
       LOG_LEVEL: 'warn',
       MAIL_WORKER_ENABLED: 'false',
       AUTH_ATTEMPTS_PER_MINUTE: '1000',
+      // One host shares every skein here; the limits are not what is measured.
+      SHARES_PER_HOUR: '1000',
+      SHARE_STORAGE_QUOTA_BYTES: String(2 ** 40),
       APPS_DIR: '',
       REDIS_URL: '',
     },

@@ -17,6 +17,7 @@ import { membersRouter } from './routes/members.ts';
 import { reviewMailUnsubscribeRouter } from './routes/review-mail-unsubscribe.ts';
 import { reviewRouter } from './routes/review.ts';
 import { questionsRouter } from './routes/questions.ts';
+import { storageRouter } from './routes/storage.ts';
 import { studiosRouter } from './routes/studios.ts';
 import { submissionsRouter } from './routes/submissions.ts';
 import { workbenchBasesRouter } from './routes/workbench-bases.ts';
@@ -44,6 +45,7 @@ export const apiRouters = [
   reviewRouter,
   galleryRouter,
   reviewMailUnsubscribeRouter,
+  storageRouter,
 ];
 
 /** better-auth answers everything under this path itself (sign-up, sign-in, verify, reset, delete). */

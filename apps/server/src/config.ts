@@ -55,6 +55,14 @@ const configSchema = z.object({
   QUESTION_MIN_INTERVAL_S: z.coerce.number().int().min(0).max(3_600).default(20),
   /** Questions one person may ask in one session. */
   QUESTIONS_PER_SESSION: z.coerce.number().int().min(1).max(1_000).default(10),
+  /** Skeins one person may share in one studio in any hour (counted from the database). */
+  SHARES_PER_HOUR: z.coerce.number().int().min(1).max(1_000).default(12),
+  /** Stored bytes of shared skein photos one person may keep in one studio. */
+  SHARE_STORAGE_QUOTA_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(100 * 1024 * 1024),
   /** Folder with the built apps (apps/<name>/dist); empty serves the API alone. */
   APPS_DIR: z.string().default(''),
 });

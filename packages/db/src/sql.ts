@@ -4,6 +4,7 @@ export {
   and,
   asc,
   count,
+  countDistinct,
   desc,
   eq,
   gt,
@@ -14,9 +15,11 @@ export {
   lt,
   lte,
   max,
+  min,
   ne,
   notInArray,
   or,
   sql,
+  sum,
 } from 'drizzle-orm';
 export type { SQL } from 'drizzle-orm';

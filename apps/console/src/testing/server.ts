@@ -2,6 +2,7 @@ import type { Me } from '@vatside/contracts/account';
 import { http, HttpResponse } from 'msw';
 import { setupServer } from 'msw/node';
 import { healthyReport, studioList } from './fixtures.ts';
+import { kelpwhistleStorage } from './storage-fixtures.ts';
 
 // A visitor: the server answers "nobody" rather than an error.
 const signedOut = () => HttpResponse.json(null);
@@ -11,6 +12,8 @@ export const server = setupServer(
   http.get('/api/me', signedOut),
   http.get('/api/studios', () => HttpResponse.json(studioList)),
   http.get('/api/health', () => HttpResponse.json(healthyReport)),
+  // The host's members page shows the storage panel.
+  http.get('/api/studios/:slug/storage', () => HttpResponse.json(kelpwhistleStorage)),
 );
 
 /** From now on, /api/me answers as this person. */

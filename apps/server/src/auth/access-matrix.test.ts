@@ -317,6 +317,7 @@ function sharingRoutes(): Record<string, RouteCase> {
       expect: everyone,
       path: () => `/api/mail/review-unsubscribe?token=${badToken}`,
     },
+    'GET /api/studios/:slug/storage': { expect: hostOnly, path: (c) => at(c, '/storage') },
   };
 }
 

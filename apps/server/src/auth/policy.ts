@@ -30,6 +30,8 @@ export const studioPolicy = {
   // The recap running order: helpers read it, the host builds it.
   'recap:read': ['moderator', 'host'],
   'recap:edit': ['host'],
+  // What the studio keeps in the object store, and who shares the most: the host's to see.
+  'storage:read': ['host'],
 } as const satisfies Record<string, readonly StudioStanding[]>;
 
 export type StudioAction = keyof typeof studioPolicy;

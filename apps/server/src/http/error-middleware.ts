@@ -38,5 +38,6 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
   if (httpError.status >= 500) req.log.error({ err }, 'request failed');
   const body: ErrorBody = { error: { code: httpError.code, message: httpError.message } };
   if (httpError.fields) body.error.fields = httpError.fields;
+  if (httpError.headers) res.set(httpError.headers);
   res.status(httpError.status).json(body);
 };

@@ -7,6 +7,8 @@ export class HttpError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fields?: Record<string, string[]>,
+    /** Sent with the error, e.g. Retry-After on a 429. */
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
   }

@@ -21,6 +21,7 @@ import {
   updateMySubmission,
   withdrawSubmission,
 } from '../services/submissions.ts';
+import { checkShareLimits } from '../services/share-limits.ts';
 import { receiveSharePhotos, sharePhotosParser } from '../uploads/receive-photos.ts';
 import { idParam } from './workbench-access.ts';
 
@@ -35,6 +36,10 @@ export function submissionsRouter({ database, objectStore, config }: AppDeps): R
   const mine = '/studios/:slug/my-submissions';
   const one = `${mine}/:submissionId`;
   const parser = sharePhotosParser(config.UPLOAD_MAX_BYTES);
+  const limits = {
+    sharesPerHour: config.SHARES_PER_HOUR,
+    storageQuotaBytes: config.SHARE_STORAGE_QUOTA_BYTES,
+  };
 
   async function sharer(req: Request<{ slug: string }>) {
     const { studio } = await authorizeStudio(db, req, req.params.slug, 'submission:share');
@@ -44,6 +49,8 @@ export function submissionsRouter({ database, objectStore, config }: AppDeps): R
   router.post('/studios/:slug/dye-alongs/:dyeAlongId/submissions', async (req, res) => {
     const { studio, userId } = await sharer(req);
     const dyeAlong = await dyeAlongOpenForSharing(db, studio.id, idParam(req, 'dyeAlongId'));
+    // Before a byte of the photos is read: over the hourly count, or no room left at all.
+    await checkShareLimits(db, { studioId: studio.id, sharerId: userId }, limits);
     const { photos, details } = await receiveSharePhotos(parser, config.UPLOAD_MAX_BYTES, req, res);
     const input = parseInput(submissionCreateSchema, details, 'details');
     const created = await shareSkein(db, objectStore, {
@@ -53,6 +60,7 @@ export function submissionsRouter({ database, objectStore, config }: AppDeps): R
       files: photos.map((p) => p.buffer),
       input,
       maxPixels: config.UPLOAD_MAX_PIXELS,
+      limits,
     });
     res.status(201).json(created);
   });

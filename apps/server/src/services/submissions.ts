@@ -24,7 +24,8 @@ import type { ObjectStore } from '../storage/object-store.ts';
 import { processImage, type ProcessedImage } from '../uploads/process-image.ts';
 import { dyeAlongRow, type DyeAlongRow } from './dye-alongs.ts';
 import { recordDecision } from './review-record.ts';
-import { sharingWindow } from './sharing-window.ts';
+import { checkShareLimits, lockSharer, type ShareLimits } from './share-limits.ts';
+import { sharingWindow } from '@vatside/contracts/sharing-window';
 import { inspirationPalette, skeinCloseness, yarnAreaPalette } from './skein-closeness.ts';
 import { loadSubmissions, toSubmission } from './submission-view.ts';
 import { pageInfo, unknownReference } from './workbench-common.ts';
@@ -138,9 +139,11 @@ export async function shareSkein(
     files: Uint8Array[];
     input: CreateInput;
     maxPixels: number;
+    limits: ShareLimits;
   },
 ): Promise<Submission> {
   const { studio, dyeAlong, input, files } = share;
+  const who = { studioId: studio.id, sharerId: share.sharerId };
   const crops: YarnCrop[] = input.crops ?? files.map(() => WHOLE_PHOTO);
   if (crops.length !== files.length) {
     throw new HttpError(400, 'VALIDATION_FAILED', 'Mark the yarn area once for each photo.', {
@@ -153,6 +156,9 @@ export async function shareSkein(
     processed.map((p, i) => ({ ...p.web, web: p.web.data, crop: crops[i]! })),
   );
   const closeness = skeinCloseness(yarnPalette, await monthPalette(db, dyeAlong));
+  // Their stored size is known now: refused here, nothing reaches the store.
+  const storedBytes = processed.reduce((total, p) => total + p.web.data.length, 0);
+  await checkShareLimits(db, who, share.limits, storedBytes);
 
   // Every object is put before the rows are written; any failure deletes every key again.
   const keys = processed.map(() => skeinKeys(studio.id));
@@ -163,6 +169,9 @@ export async function shareSkein(
       await store.put(keys[i]!.thumbKey, p.thumb.data, p.thumb.contentType);
     }
     id = await db.transaction(async (tx) => {
+      // Again under a per-sharer lock: two shares at once, in any process, cannot both fit.
+      await lockSharer(tx, who);
+      await checkShareLimits(tx, who, share.limits, storedBytes);
       const [row] = await tx
         .insert(submissions)
         .values({

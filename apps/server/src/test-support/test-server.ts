@@ -16,6 +16,8 @@ export function startTestServer(
       LOG_LEVEL: 'silent',
       // Tests sign many people up from one address; the limiter has its own test.
       AUTH_ATTEMPTS_PER_MINUTE: '1000',
+      // Test viewers share many skeins; the share limits have their own test.
+      SHARES_PER_HOUR: '1000',
       APPS_DIR: '',
       // Tests that need the mail job turn it on, so other tests' servers never send their mails.
       MAIL_WORKER_ENABLED: 'false',

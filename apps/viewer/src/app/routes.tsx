@@ -24,6 +24,11 @@ export const routes: RouteObject[] = [
             path: 's/:slug/dye-alongs/:dyeAlongId',
             lazy: () => import('./routes/studio-dye-along.tsx'),
           },
+          {
+            path: 's/:slug/dye-alongs/:dyeAlongId/share',
+            lazy: () => import('./routes/share-skein.tsx'),
+          },
+          { path: 's/:slug/my-skeins', lazy: () => import('./routes/my-skeins.tsx') },
           { path: 'unsubscribe', lazy: () => import('./routes/unsubscribe.tsx') },
           { path: '*', lazy: () => import('./routes/not-found.tsx') },
         ],

@@ -5,9 +5,10 @@ import { useParams } from 'react-router-dom';
 import { InvitationsPanel } from '../../features/invitations/components/InvitationsPanel.tsx';
 import { membersQueryOptions } from '../../features/members/api.ts';
 import { MembersTable } from '../../features/members/components/MembersTable.tsx';
+import { StoragePanel } from '../../features/storage/components/StoragePanel.tsx';
 import { studioQueryOptions } from '../../features/studios/api.ts';
 
-/** Members and invitations of the current studio; hosts change, moderators look. */
+/** Members, invitations and storage of the current studio; hosts change, moderators look. */
 export function Component() {
   const { slug = '' } = useParams();
   const { data: studio } = useQuery(studioQueryOptions(slug));
@@ -40,7 +41,12 @@ export function Component() {
           <MembersTable slug={slug} members={members.data.members} canManage={isHost} />
         )}
       </section>
-      {isHost ? <InvitationsPanel slug={slug} /> : null}
+      {isHost ? (
+        <div className="space-y-8">
+          <InvitationsPanel slug={slug} />
+          <StoragePanel slug={slug} />
+        </div>
+      ) : null}
     </div>
   );
 }

@@ -5,6 +5,7 @@ import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { useParams } from 'react-router-dom';
 import { NextDyeAlongLink } from '../../features/dye-alongs/components/NextDyeAlongLink.tsx';
 import { LiveNowLink } from '../../features/live/components/LiveNowLink.tsx';
+import { MySkeinsLink } from '../../features/sharing/components/MySkeinsLink.tsx';
 import { studioQueryOptions } from '../../features/studios/api.ts';
 import { FollowPanel } from '../../features/studios/components/FollowPanel.tsx';
 import { StudioProfile } from '../../features/studios/components/StudioProfile.tsx';
@@ -40,6 +41,7 @@ export function Component() {
       <StudioProfile studio={studio} />
       <LiveNowLink slug={studio.slug} />
       <NextDyeAlongLink slug={studio.slug} />
+      {studio.myRole !== 'visitor' ? <MySkeinsLink slug={studio.slug} /> : null}
       <FollowPanel studio={studio} />
     </div>
   );

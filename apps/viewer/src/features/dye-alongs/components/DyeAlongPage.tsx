@@ -1,4 +1,5 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import type { PublicDyeAlong } from '@vatside/contracts/dye-alongs';
 import { ApiError } from '@vatside/ui/api-client.ts';
 import { Card } from '@vatside/ui/Card';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
@@ -6,6 +7,7 @@ import { textLinkClass } from '@vatside/ui/link-class.ts';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { PrepChecklistView } from '@vatside/ui/supplies/PrepChecklistView';
 import { SupplyListView } from '@vatside/ui/supplies/SupplyListView';
+import type { ReactNode } from 'react';
 import { publicDyeAlongQueryOptions } from '../api.ts';
 import { useReader } from '../hooks/use-reader.ts';
 import { InspirationPalette } from './Palette.tsx';
@@ -21,8 +23,19 @@ const statusWords = {
   archived: 'From the archive',
 } as const;
 
-/** A dye-along as its viewers read it: when, what it looks like, what to get and do. */
-export function DyeAlongPage({ slug, dyeAlongId }: { slug: string; dyeAlongId: string }) {
+/**
+ * A dye-along as its viewers read it: when, what it looks like, what to get and do. `sharing`
+ * puts another feature's word on sharing skeins right under the start time.
+ */
+export function DyeAlongPage({
+  slug,
+  dyeAlongId,
+  sharing,
+}: {
+  slug: string;
+  dyeAlongId: string;
+  sharing?: (dyeAlong: PublicDyeAlong) => ReactNode;
+}) {
   const { reader, ready, signedIn, change, saveError } = useReader();
   const page = useQuery({
     ...publicDyeAlongQueryOptions(slug, dyeAlongId, reader),
@@ -59,6 +72,7 @@ export function DyeAlongPage({ slug, dyeAlongId }: { slug: string; dyeAlongId: s
         {status ? <p className="text-lg font-bold">{status}</p> : null}
       </header>
       <StartTime dyeAlong={dyeAlong} timeZone={reader.timeZone} />
+      {sharing?.(dyeAlong)}
       <nav aria-label="On this page" className="flex flex-wrap gap-x-6">
         <a href="#supplies-title" className={textLinkClass}>
           What to get

@@ -1,4 +1,4 @@
-import type { DyeAlongStatus } from '@vatside/contracts/dye-alongs';
+import type { DyeAlongStatus } from './dye-alongs.ts';
 
 // When viewers may share a skein for a dye-along. Pure, so the rule is tested on its own and
 // the refusal can say plainly why.
