@@ -24,6 +24,14 @@ export const routes: RouteObject[] = [
             path: 's/:slug/dye-alongs/:dyeAlongId',
             lazy: () => import('./routes/studio-dye-along.tsx'),
           },
+          {
+            path: 's/:slug/dye-alongs/:dyeAlongId/gallery',
+            lazy: () => import('./routes/studio-gallery.tsx'),
+          },
+          {
+            path: 's/:slug/dye-alongs/:dyeAlongId/gallery/:skeinId',
+            lazy: () => import('./routes/studio-gallery-skein.tsx'),
+          },
           { path: 'unsubscribe', lazy: () => import('./routes/unsubscribe.tsx') },
           { path: '*', lazy: () => import('./routes/not-found.tsx') },
         ],

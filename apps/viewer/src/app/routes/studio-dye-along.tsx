@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { DyeAlongPage } from '../../features/dye-alongs/components/DyeAlongPage.tsx';
+import { GalleryLink } from '../../features/gallery/components/GalleryLink.tsx';
 import { LiveNowLink } from '../../features/live/components/LiveNowLink.tsx';
 import { studioQueryOptions } from '../../features/studios/api.ts';
 import { FollowPanel } from '../../features/studios/components/FollowPanel.tsx';
@@ -13,6 +14,7 @@ export function Component() {
     <div className="space-y-6">
       <LiveNowLink slug={slug} />
       <DyeAlongPage slug={slug} dyeAlongId={dyeAlongId} />
+      <GalleryLink slug={slug} dyeAlongId={dyeAlongId} />
       {studio ? <FollowPanel studio={studio} /> : null}
     </div>
   );
