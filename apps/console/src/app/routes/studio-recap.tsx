@@ -36,13 +36,7 @@ export function Component() {
           retrying={recap.isFetching}
         />
       ) : (
-        <RunningOrder
-          key={recap.dataUpdatedAt}
-          slug={slug}
-          dyeAlongId={dyeAlongId}
-          recap={recap.data}
-          canEdit={canEdit}
-        />
+        <RunningOrder slug={slug} dyeAlongId={dyeAlongId} recap={recap.data} canEdit={canEdit} />
       )}
     </div>
   );

@@ -26,7 +26,8 @@ export function GalleryScreen({ slug, dyeAlongId }: { slug: string; dyeAlongId: 
   );
 
   if (gallery.isPending) return <LoadingBlock label="Gathering the skeins…" />;
-  if (gallery.isError) {
+  // A failed next page keeps the pages already shown; only a first failure replaces them.
+  if (!gallery.data) {
     return (
       <div className="space-y-4">
         {back}
@@ -83,7 +84,7 @@ export function GalleryScreen({ slug, dyeAlongId }: { slug: string; dyeAlongId: 
         ) : null}
         {gallery.isFetchNextPageError ? (
           <p role="alert" className="font-bold text-madder-700">
-            More skeins did not load: {gallery.error?.message}
+            More skeins did not load: {gallery.error.message}
           </p>
         ) : null}
       </section>
