@@ -74,6 +74,12 @@ export const routes: RouteObject[] = [
     lazy: () => import('./routes/recap-presenter.tsx'),
   },
   {
+    path: '/studios/:slug/dye-alongs/:dyeAlongId/presenter/notes',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Opening the notes…" />,
+    lazy: () => import('./routes/recap-presenter-notes.tsx'),
+  },
+  {
     // Moderators answer questions here without the pot board.
     path: '/studios/:slug/live/:sessionId/questions',
     errorElement: <RouteError />,

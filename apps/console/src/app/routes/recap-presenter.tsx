@@ -5,18 +5,27 @@ import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { useParams } from 'react-router-dom';
 import { recapQueryOptions } from '../../features/recap/api.ts';
 import { Presenter } from '../../features/recap/components/Presenter.tsx';
+import { PresenterNotes } from '../../features/recap/components/PresenterNotes.tsx';
 
 /** The recap full screen, without the console around it: for recording. */
 export function Component() {
   const { slug = '', dyeAlongId = '' } = useParams();
   return (
     <RequireSignIn>
-      <PresenterLoader slug={slug} dyeAlongId={dyeAlongId} />
+      <RecapLoader slug={slug} dyeAlongId={dyeAlongId} notes={false} />
     </RequireSignIn>
   );
 }
 
-function PresenterLoader({ slug, dyeAlongId }: { slug: string; dyeAlongId: string }) {
+export function RecapLoader({
+  slug,
+  dyeAlongId,
+  notes,
+}: {
+  slug: string;
+  dyeAlongId: string;
+  notes: boolean;
+}) {
   // Loaded once: a refetch while recording would reset nothing, but it is not wanted either.
   const recap = useQuery({
     ...recapQueryOptions(slug, dyeAlongId),
@@ -37,10 +46,10 @@ function PresenterLoader({ slug, dyeAlongId }: { slug: string; dyeAlongId: strin
       </main>
     );
   }
-  return (
-    <Presenter
-      recap={recap.data}
-      leaveTo={`/console/studios/${slug}/dye-alongs/${dyeAlongId}/recap`}
-    />
+  const at = `/console/studios/${slug}/dye-alongs/${dyeAlongId}`;
+  return notes ? (
+    <PresenterNotes recap={recap.data} />
+  ) : (
+    <Presenter recap={recap.data} leaveTo={`${at}/recap`} notesPath={`${at}/presenter/notes`} />
   );
 }

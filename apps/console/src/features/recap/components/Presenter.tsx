@@ -2,6 +2,7 @@ import type { Recap } from '@vatside/contracts/gallery';
 import { Swatch } from '@vatside/ui/Swatch';
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { useOfflinePhotos } from '../hooks/use-offline-photos.ts';
+import { usePresenterChannel } from '../hooks/use-presenter-channel.ts';
 import { slideOf, slidePhoto, slideTitle, type Slide } from '../slides.ts';
 
 // What presentation clickers send: arrows, PageUp/PageDown, and Space (Shift+Space goes back).
@@ -9,10 +10,19 @@ const NEXT_KEYS = new Set(['ArrowRight', 'ArrowDown', 'PageDown', ' ']);
 const BACK_KEYS = new Set(['ArrowLeft', 'ArrowUp', 'PageUp']);
 
 /**
- * The recap, full screen, one item at a time, for recording. The note shows only when the host
- * turns it on (N), so a recording of this one screen never carries it by accident.
+ * The recap, full screen, one item at a time, for recording. The notes live in a window of
+ * their own (kept in step), or show here only while the host turns them on (N), so a recording
+ * of this screen never carries them by accident.
  */
-export function Presenter({ recap, leaveTo }: { recap: Recap; leaveTo: string }) {
+export function Presenter({
+  recap,
+  leaveTo,
+  notesPath,
+}: {
+  recap: Recap;
+  leaveTo: string;
+  notesPath: string;
+}) {
   const slides = recap.items.map(slideOf);
   const photos = useOfflinePhotos(
     slides.flatMap((s) => {
@@ -25,6 +35,11 @@ export function Presenter({ recap, leaveTo }: { recap: Recap; leaveTo: string })
   const stage = useRef<HTMLDivElement>(null);
   const last = slides.length - 1;
   const go = useCallback((to: number) => setIndex(Math.max(0, Math.min(last, to))), [last]);
+  const send = usePresenterChannel(recap.dyeAlongId, (message) => {
+    if (message.type === 'go') go(message.index);
+    if (message.type === 'hello') send({ type: 'at', index });
+  });
+  useEffect(() => send({ type: 'at', index }), [send, index]);
 
   const toggleFullscreen = useCallback(() => {
     if (document.fullscreenElement) void document.exitFullscreen();
@@ -71,6 +86,13 @@ export function Presenter({ recap, leaveTo }: { recap: Recap; leaveTo: string })
               : `Holding photos for offline: ${photos.done} / ${photos.total}`}
           {photos.failed > 0 ? ` (${photos.failed} did not load)` : ''}
         </p>
+        <a
+          href={notesPath}
+          target="vatside-recap-notes"
+          className="min-h-12 content-center font-bold underline"
+        >
+          Open the notes window
+        </a>
         <p className="ml-auto text-wool-200">
           ←/→, PageUp/PageDown, Space · Home/End · F full screen · N note
         </p>
