@@ -152,6 +152,23 @@ beforeAll(async () => {
       expect(decided.status).toBe(200);
     }
   }
+  // The host's own finished skein of Pool Teal, with the colors it aims at.
+  const named = await host.call('PATCH', api(`/colorways/${teal!.id}`), {
+    targetSwatches: [
+      { hex: '#2d6f86', name: 'Deep pool' },
+      { hex: '#8fc1c9', name: 'Shallows' },
+    ],
+  });
+  expect(named.status).toBe(200);
+  const photo = new FormData();
+  photo.append('purpose', 'colorwayPhoto');
+  photo.append('colorwayId', teal!.id);
+  photo.append(
+    'image',
+    new Blob([new Uint8Array(await skeinJpeg(drawing, '#2a6b80'))], { type: 'image/jpeg' }),
+    'pool-teal.jpg',
+  );
+  expect((await host.call('POST', api('/images'), photo)).status).toBe(201);
   await drawing.close();
 }, 120_000);
 
@@ -173,7 +190,13 @@ describe('the month’s gallery and the recap', () => {
     const firstThumb = grid.locator('img').first();
     expect(await firstThumb.getAttribute('loading')).toBe('lazy');
     expect(Number(await firstThumb.getAttribute('width'))).toBeGreaterThan(0);
-    await page.getByRole('heading', { name: 'From the studio' }).waitFor();
+    // The photos really arrive for a visitor (approved ones are public).
+    await expect
+      .poll(() => firstThumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth))
+      .toBeGreaterThan(0);
+    const strip = page.getByRole('region', { name: 'From the studio' });
+    await strip.getByText('Deep pool').waitFor();
+    await strip.getByRole('img', { name: 'The host’s skein of Pool Teal' }).waitFor();
     await saveScreenshot(page, 'gallery-recap-phone-gallery');
 
     await page
@@ -249,6 +272,7 @@ describe('the month’s gallery and the recap', () => {
     await page.keyboard.press('PageDown');
     await expect.poll(() => progress.textContent()).toBe('2 / 3');
     expect(await shown.textContent()).toBe('Pool Teal');
+    await page.getByRole('img', { name: 'Pool Teal (the studio’s own)' }).waitFor();
     await page.keyboard.press('Space');
     await expect.poll(() => progress.textContent()).toBe('3 / 3');
     expect(await shown.textContent()).toBe('Otto Marsh');

@@ -177,7 +177,7 @@ function SlidePhoto({ slide, src }: { slide: Slide; src: (url: string) => string
         width={photo.width}
         height={photo.height}
         alt={slideTitle(slide)}
-        className="max-h-[72dvh] w-auto max-w-full rounded-2xl object-contain"
+        className="h-auto max-h-[72dvh] w-full rounded-2xl object-contain"
       />
     </div>
   );

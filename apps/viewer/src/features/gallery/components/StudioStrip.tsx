@@ -9,7 +9,7 @@ export function StudioStrip({ colorways }: { colorways: GalleryColorway[] }) {
       <h2 id="studio-strip-title" className="font-display text-2xl font-semibold">
         From the studio
       </h2>
-      <ul className="-mx-4 flex snap-x gap-3 overflow-x-auto px-4 pb-2">
+      <ul className="-mx-4 flex snap-x scroll-px-4 gap-3 overflow-x-auto px-4 pb-2">
         {colorways.map((colorway) => (
           <li
             key={colorway.id}
