@@ -34,11 +34,25 @@ export const gallerySkeinSchema = z.object({
 });
 export type GallerySkein = z.infer<typeof gallerySkeinSchema>;
 
+/** The host's own photo of a finished colorway (the newest from the workbench), public here. */
+export const galleryColorwayPhotoSchema = z.object({
+  width: z.number().int(),
+  height: z.number().int(),
+  thumbWidth: z.number().int(),
+  thumbHeight: z.number().int(),
+  webUrl: z.string(),
+  thumbUrl: z.string(),
+});
+
 export const galleryColorwaySchema = z.object({
   id: idSchema,
   name: z.string(),
   technique: techniqueSchema,
+  /** The colors the colorway aims at, each with a name (never a color alone). */
+  swatches: z.array(z.object({ hex: z.string(), name: z.string() })),
+  photo: galleryColorwayPhotoSchema.nullable(),
 });
+export type GalleryColorway = z.infer<typeof galleryColorwaySchema>;
 
 export const gallerySchema = pageOf(gallerySkeinSchema).extend({
   /** The month's colorways, for the filter and for the host's own skeins beside the community's. */

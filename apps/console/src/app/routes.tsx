@@ -40,6 +40,10 @@ export const routes: RouteObject[] = [
                 path: 'dye-alongs/:dyeAlongId',
                 lazy: () => import('./routes/studio-dye-along.tsx'),
               },
+              {
+                path: 'dye-alongs/:dyeAlongId/recap',
+                lazy: () => import('./routes/studio-recap.tsx'),
+              },
             ],
           },
           { path: 'join/:token', lazy: () => import('./routes/join.tsx') },
@@ -61,6 +65,19 @@ export const routes: RouteObject[] = [
     errorElement: <RouteError />,
     hydrateFallbackElement: <LoadingBlock label="Setting out the pots…" />,
     lazy: () => import('./routes/live-board.tsx'),
+  },
+  {
+    // The recap presenter fills the screen for recording, like the pot board.
+    path: '/studios/:slug/dye-alongs/:dyeAlongId/presenter',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Setting out the recap…" />,
+    lazy: () => import('./routes/recap-presenter.tsx'),
+  },
+  {
+    path: '/studios/:slug/dye-alongs/:dyeAlongId/presenter/notes',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Opening the notes…" />,
+    lazy: () => import('./routes/recap-presenter-notes.tsx'),
   },
   {
     // Moderators answer questions here without the pot board.

@@ -299,6 +299,18 @@ function sharingRoutes(): Record<string, RouteCase> {
       expect: everyone,
       path: (c) => at(c, `/dye-alongs/${live.dyeAlongId}/gallery`),
     },
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/gallery/:submissionId': {
+      expect: everyone,
+      path: (c) => at(c, `/dye-alongs/${live.dyeAlongId}/gallery/${id()}`),
+    },
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/colorways/:colorwayId/photos/:imageId/web': {
+      expect: everyone,
+      path: (c) => at(c, `/dye-alongs/${live.dyeAlongId}/colorways/${id()}/photos/${id()}/web`),
+    },
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/colorways/:colorwayId/photos/:imageId/thumb': {
+      expect: everyone,
+      path: (c) => at(c, `/dye-alongs/${live.dyeAlongId}/colorways/${id()}/photos/${id()}/thumb`),
+    },
     'GET /api/studios/:slug/dye-alongs/:dyeAlongId/recap': {
       expect: staff,
       path: (c) => at(c, `/dye-alongs/${live.dyeAlongId}/recap`),

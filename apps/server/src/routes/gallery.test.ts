@@ -1,10 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Gallery, Recap } from '@vatside/contracts/gallery';
 import type { Submission } from '@vatside/contracts/submissions';
+import type { Image } from '@vatside/contracts/workbench-images';
 import type { RunningServer } from '../server.ts';
 import { castStudio, type Cast } from '../test-support/personas.ts';
 import { makeSharingMonth, share, type SharingMonth } from '../test-support/sharing-fixtures.ts';
 import { startTestServer } from '../test-support/test-server.ts';
+import { bandedPng } from '../uploads/test-images.ts';
 
 describe('the public gallery and the recap running order', () => {
   let server: RunningServer;
@@ -116,6 +118,53 @@ describe('the public gallery and the recap running order', () => {
     ).toBe(404);
   });
 
+  it('one skein has its own address, for public skeins only', async () => {
+    const one = (id: string) =>
+      cast.clients.visitor.request('GET', at(`/dye-alongs/${month.dyeAlong.id}/gallery/${id}`));
+    const res = await one(skeins.approved.id);
+    expect(res.status).toBe(200);
+    expect(await res.json()).toMatchObject({
+      id: skeins.approved.id,
+      makerName: 'Vale Viewer',
+      baseName: 'Shoreline Sock',
+      dyesUsed: ['Brinewell Blue', 'Table vinegar'],
+    });
+    for (const key of ['waiting', 'rejected', 'needsChanges', 'withdrawn'] as const) {
+      expect((await one(skeins[key].id)).status, key).toBe(404);
+    }
+  });
+
+  it('shows the host’s own colorway beside the community’s: named swatches and its photo', async () => {
+    const patched = await cast.clients.host.request('PATCH', at(`/colorways/${month.colorwayId}`), {
+      targetSwatches: [{ hex: '#2d6f86', name: 'Pool teal' }],
+    });
+    expect(patched.status).toBe(200);
+    const form = new FormData();
+    form.append('purpose', 'colorwayPhoto');
+    form.append('colorwayId', month.colorwayId);
+    form.append(
+      'image',
+      new Blob([new Uint8Array(await bandedPng(60, 40))], { type: 'image/png' }),
+      'skein.png',
+    );
+    const uploaded = await cast.clients.host.request('POST', at('/images'), form);
+    expect(uploaded.status).toBe(201);
+    const photo = (await uploaded.json()) as Image;
+
+    const [colorway] = (await galleryPage()).colorways;
+    expect(colorway).toMatchObject({
+      name: 'Pool Teal',
+      swatches: [{ hex: '#2d6f86', name: 'Pool teal' }],
+      photo: { width: photo.width, height: photo.height },
+    });
+    const thumb = await cast.clients.visitor.request('GET', colorway!.photo!.thumbUrl);
+    expect(thumb.status).toBe(200);
+    expect(thumb.headers.get('x-content-type-options')).toBe('nosniff');
+    // The same route never serves the month's other images (here: the inspiration image).
+    const other = colorway!.photo!.thumbUrl.replace(photo.id, month.inspiration.id);
+    expect((await cast.clients.visitor.request('GET', other)).status).toBe(404);
+  });
+
   describe('recap running order', () => {
     it('persists, reorders, and keeps each note', async () => {
       const items = [
@@ -155,6 +204,33 @@ describe('the public gallery and the recap running order', () => {
       expect(res.status).toBe(400);
       const after = (await (await cast.clients.host.request('GET', recapPath())).json()) as Recap;
       expect(after.items).toEqual(before.items);
+    });
+
+    it('a maker who withdraws consent leaves the recap at once, but stays in the gallery', async () => {
+      const late = await share(cast.clients.viewer, cast, month.dyeAlong.id, {
+        details: { consentToFeature: true },
+      });
+      await decide(late.id, { decision: 'feature' });
+      const put = await cast.clients.host.request('PUT', recapPath(), {
+        items: [{ submissionId: late.id, note: 'Last one.' }],
+      });
+      expect(put.status).toBe(200);
+
+      const revoked = await cast.clients.viewer.request(
+        'PUT',
+        at(`/my-submissions/${late.id}/consent`),
+        { consentToFeature: false },
+      );
+      expect(revoked.status).toBe(200);
+      const read = (await (await cast.clients.host.request('GET', recapPath())).json()) as Recap;
+      expect(read.items).toEqual([]);
+      expect(read.candidates.skeins.map((s) => s.id)).not.toContain(late.id);
+      const inGallery = (await galleryPage('limit=100')).items.find((s) => s.id === late.id);
+      expect(inGallery).toMatchObject({ featured: false });
+      const again = await cast.clients.host.request('PUT', recapPath(), {
+        items: [{ submissionId: late.id }],
+      });
+      expect(again.status).toBe(400);
     });
   });
 });

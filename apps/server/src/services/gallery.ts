@@ -1,15 +1,18 @@
 import { and, asc, desc, eq, inArray, notInArray, sql } from '@vatside/db/sql';
 import type {
   Gallery,
+  GalleryColorway,
+  GallerySkein,
   Recap,
   RecapItem,
   galleryQuerySchema,
   recapUpdateSchema,
 } from '@vatside/contracts/gallery';
 import type { Database } from '@vatside/db/client';
-import { colorways, dyeAlongColorways, recapItems, submissions } from '@vatside/db/schema';
+import { colorways, dyeAlongColorways, images, recapItems, submissions } from '@vatside/db/schema';
 import type { z } from 'zod';
-import { HttpError } from '../http/errors.ts';
+import { HttpError, notFound } from '../http/errors.ts';
+import { dyeAlongApiPath } from './dye-along-view.ts';
 import { loadSubmissions, toGallerySkein } from './submission-view.ts';
 import type { StudioRef } from './submissions.ts';
 import { pageInfo } from './workbench-common.ts';
@@ -20,13 +23,88 @@ import { pageInfo } from './workbench-common.ts';
 
 const PUBLIC_STATUSES = ['approved', 'featured'] as const;
 
-async function monthColorways(db: Database, dyeAlongId: string) {
-  return db
-    .select({ id: colorways.id, name: colorways.name, technique: colorways.technique })
+/** The month's colorways with their target swatches and the host's newest photo of each. */
+async function monthColorways(
+  db: Database,
+  studio: StudioRef,
+  dyeAlongId: string,
+): Promise<GalleryColorway[]> {
+  const rows = await db
+    .select({
+      id: colorways.id,
+      name: colorways.name,
+      technique: colorways.technique,
+      swatches: colorways.targetSwatches,
+    })
     .from(dyeAlongColorways)
     .innerJoin(colorways, eq(colorways.id, dyeAlongColorways.colorwayId))
     .where(eq(dyeAlongColorways.dyeAlongId, dyeAlongId))
     .orderBy(asc(dyeAlongColorways.position));
+  const photos = rows.length
+    ? await db
+        .select()
+        .from(images)
+        .where(
+          and(
+            eq(images.purpose, 'colorwayPhoto'),
+            inArray(
+              images.colorwayId,
+              rows.map((r) => r.id),
+            ),
+          ),
+        )
+        .orderBy(desc(images.createdAt), asc(images.id))
+    : [];
+  return rows.map((row) => {
+    const photo = photos.find((p) => p.colorwayId === row.id);
+    const at = `${dyeAlongApiPath(studio.slug, dyeAlongId)}/colorways/${row.id}/photos/${photo?.id}`;
+    return {
+      ...row,
+      swatches: row.swatches.map(({ hex, name }) => ({ hex, name })),
+      photo: photo
+        ? {
+            width: photo.width,
+            height: photo.height,
+            thumbWidth: photo.thumbWidth,
+            thumbHeight: photo.thumbHeight,
+            webUrl: `${at}/web`,
+            thumbUrl: `${at}/thumb`,
+          }
+        : null,
+    };
+  });
+}
+
+/**
+ * A colorway photo's stored rendition, only when it is the host's photo of one of this month's
+ * colorways (the month is already known to be past its draft).
+ */
+export async function monthColorwayPhoto(
+  db: Database,
+  dyeAlongId: string,
+  colorwayId: string,
+  imageId: string,
+  which: 'web' | 'thumb',
+) {
+  const [row] = await db
+    .select({ webKey: images.webKey, thumbKey: images.thumbKey, contentType: images.contentType })
+    .from(images)
+    .innerJoin(
+      dyeAlongColorways,
+      and(
+        eq(dyeAlongColorways.colorwayId, images.colorwayId),
+        eq(dyeAlongColorways.dyeAlongId, dyeAlongId),
+      ),
+    )
+    .where(
+      and(
+        eq(images.id, imageId),
+        eq(images.colorwayId, colorwayId),
+        eq(images.purpose, 'colorwayPhoto'),
+      ),
+    );
+  if (!row) throw notFound('That photo');
+  return { key: which === 'web' ? row.webKey : row.thumbKey, contentType: row.contentType };
 }
 
 export async function gallery(
@@ -54,8 +132,31 @@ export async function gallery(
   return {
     items: items.map((s) => toGallerySkein(s, studio.slug)),
     page: pageInfo(query, total),
-    colorways: await monthColorways(db, dyeAlongId),
+    colorways: await monthColorways(db, studio, dyeAlongId),
   };
+}
+
+/** One skein of the month's gallery (its own address, to be shared); others are not found. */
+export async function gallerySkein(
+  db: Database,
+  studio: StudioRef,
+  dyeAlongId: string,
+  submissionId: string,
+): Promise<GallerySkein> {
+  const { items } = await loadSubmissions(
+    db,
+    and(
+      eq(submissions.studioId, studio.id),
+      eq(submissions.dyeAlongId, dyeAlongId),
+      eq(submissions.id, submissionId),
+      inArray(submissions.status, [...PUBLIC_STATUSES]),
+    ),
+    [],
+    { limit: 1, offset: 0 },
+  );
+  const [skein] = items;
+  if (!skein) throw notFound('That skein');
+  return toGallerySkein(skein, studio.slug);
 }
 
 /** May this skein be shown publicly? (Its photos answer anyone once this is true.) */
@@ -80,7 +181,7 @@ export async function getRecap(
       .from(recapItems)
       .where(eq(recapItems.dyeAlongId, dyeAlongId))
       .orderBy(asc(recapItems.position)),
-    monthColorways(db, dyeAlongId),
+    monthColorways(db, studio, dyeAlongId),
   ]);
   const inOrder = items.flatMap((i) => (i.submissionId ? [i.submissionId] : []));
   const [skeins, candidates] = await Promise.all([
@@ -139,7 +240,7 @@ export async function setRecap(
           .for('share')
       : [];
     const okSkeins = new Set(eligible.map((s) => s.id));
-    const okColorways = new Set((await monthColorways(db, dyeAlongId)).map((c) => c.id));
+    const okColorways = new Set((await monthColorways(db, studio, dyeAlongId)).map((c) => c.id));
     const fields: Record<string, string[]> = {};
     input.items.forEach((item, i) => {
       if ('submissionId' in item && !okSkeins.has(item.submissionId)) {

@@ -29,6 +29,14 @@ export const routes: RouteObject[] = [
             lazy: () => import('./routes/share-skein.tsx'),
           },
           { path: 's/:slug/my-skeins', lazy: () => import('./routes/my-skeins.tsx') },
+          {
+            path: 's/:slug/dye-alongs/:dyeAlongId/gallery',
+            lazy: () => import('./routes/studio-gallery.tsx'),
+          },
+          {
+            path: 's/:slug/dye-alongs/:dyeAlongId/gallery/:skeinId',
+            lazy: () => import('./routes/studio-gallery-skein.tsx'),
+          },
           { path: 'unsubscribe', lazy: () => import('./routes/unsubscribe.tsx') },
           { path: '*', lazy: () => import('./routes/not-found.tsx') },
         ],

@@ -12,6 +12,7 @@ import { StatusBadge } from '../../features/dye-alongs/components/StatusBadge.ts
 import { StatusPanel } from '../../features/dye-alongs/components/StatusPanel.tsx';
 import { SuppliesPanel } from '../../features/dye-alongs/components/SuppliesPanel.tsx';
 import { formValuesOf, updateBody } from '../../features/dye-alongs/form-values.ts';
+import { RecapPanel } from '../../features/recap/components/RecapPanel.tsx';
 import { useDyeAlongChoices } from './dye-along-choices.ts';
 import { useWorkbench } from './workbench-role.ts';
 
@@ -86,6 +87,7 @@ export function Component() {
           initialWeightG={me?.profile.defaultSkeinWeightG ?? 100}
         />
       </Panel>
+      {dyeAlong.status !== 'draft' ? <RecapPanel slug={slug} dyeAlongId={dyeAlong.id} /> : null}
       {canEdit ? <EditPanel slug={slug} dyeAlong={dyeAlong} /> : null}
     </div>
   );

@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { DyeAlongPage } from '../../features/dye-alongs/components/DyeAlongPage.tsx';
+import { GalleryLink } from '../../features/gallery/components/GalleryLink.tsx';
 import { LiveNowLink } from '../../features/live/components/LiveNowLink.tsx';
 import { ShareSkeinLink } from '../../features/sharing/components/ShareSkeinLink.tsx';
 import { studioQueryOptions } from '../../features/studios/api.ts';
@@ -26,6 +27,7 @@ export function Component() {
           />
         )}
       />
+      <GalleryLink slug={slug} dyeAlongId={dyeAlongId} />
       {studio ? <FollowPanel studio={studio} /> : null}
     </div>
   );

@@ -1,0 +1,126 @@
+import { useSortable } from '@dnd-kit/sortable';
+import { CSS } from '@dnd-kit/utilities';
+import { Button } from '@vatside/ui/Button';
+import { useId } from 'react';
+import { slideTitle, type Slide } from '../slides.ts';
+
+/** One entry: drag handle, thumbnail, what it is, the note to say on camera, move buttons. */
+export function RunningOrderItem({
+  slide,
+  number,
+  isLast,
+  canEdit,
+  onMove,
+  onNote,
+  onRemove,
+}: {
+  slide: Slide;
+  number: number;
+  isLast: boolean;
+  canEdit: boolean;
+  onMove: (by: -1 | 1) => void;
+  onNote: (note: string) => void;
+  onRemove: () => void;
+}) {
+  const noteId = useId();
+  const {
+    attributes,
+    listeners,
+    setNodeRef,
+    setActivatorNodeRef,
+    transform,
+    transition,
+    isDragging,
+  } = useSortable({ id: slide.key, disabled: !canEdit });
+  const title = slideTitle(slide);
+  const photo = slide.kind === 'skein' ? slide.skein.photos[0] : slide.colorway.photo;
+  return (
+    <li
+      ref={setNodeRef}
+      aria-label={`${number}. ${title}`}
+      style={{ transform: CSS.Transform.toString(transform), transition }}
+      className={`flex gap-3 rounded-card border-2 bg-white p-3 ${isDragging ? 'relative z-10 border-vat-600 shadow-card' : 'border-wool-300'}`}
+    >
+      {canEdit ? (
+        <button
+          ref={setActivatorNodeRef}
+          type="button"
+          aria-label={`Drag item ${number}`}
+          className="flex min-h-12 w-12 shrink-0 cursor-grab touch-none items-center justify-center rounded-lg border-2 border-wool-300 text-2xl text-vat-800 active:cursor-grabbing"
+          {...attributes}
+          {...listeners}
+        >
+          <span aria-hidden="true">⠿</span>
+        </button>
+      ) : null}
+      {photo ? (
+        <img
+          src={photo.thumbUrl}
+          width={photo.thumbWidth}
+          height={photo.thumbHeight}
+          loading="lazy"
+          alt=""
+          className="size-20 shrink-0 rounded-lg object-cover"
+        />
+      ) : null}
+      <div className="min-w-0 flex-1 space-y-2">
+        <p className="text-lg">
+          <span className="mr-2 inline-flex size-8 items-center justify-center rounded-full bg-vat-800 font-bold text-wool-50">
+            {number}
+          </span>
+          <span className="font-bold">{title}</span>
+        </p>
+        {slide.kind === 'skein' ? (
+          <p className="text-vat-800">
+            {slide.skein.baseName}
+            {slide.skein.dyesUsed.length ? ` · ${slide.skein.dyesUsed.join(', ')}` : ''}
+          </p>
+        ) : null}
+        {canEdit ? (
+          <>
+            <label htmlFor={noteId} className="block font-bold">
+              Note for item {number} (what to say on camera)
+            </label>
+            <textarea
+              id={noteId}
+              value={slide.note}
+              maxLength={500}
+              rows={2}
+              onChange={(e) => onNote(e.target.value)}
+              className="w-full rounded-lg border-2 border-wool-300 p-2"
+            />
+            <div className="flex flex-wrap gap-2">
+              <Button
+                variant="secondary"
+                disabled={number === 1}
+                onClick={() => onMove(-1)}
+                aria-label={`Move item ${number} up`}
+              >
+                ↑ Up
+              </Button>
+              <Button
+                variant="secondary"
+                disabled={isLast}
+                onClick={() => onMove(1)}
+                aria-label={`Move item ${number} down`}
+              >
+                ↓ Down
+              </Button>
+              <Button
+                variant="secondary"
+                onClick={onRemove}
+                aria-label={`Take item ${number} out of the recap`}
+              >
+                Take out
+              </Button>
+            </div>
+          </>
+        ) : slide.note ? (
+          <p>
+            <span className="font-bold">Note:</span> {slide.note}
+          </p>
+        ) : null}
+      </div>
+    </li>
+  );
+}
