@@ -4,9 +4,12 @@
 // moment: each share is one 12-megapixel JPEG through the real route (sniffing, pixel limit,
 // orientation, sRGB, renditions, yarn-area palette, object store, rows). Each share is timed
 // from its request to the 201, which comes after the renditions are stored and the rows saved.
-// Prints median and p95 and the server's peak memory (VmHWM from /proc) beside the targets.
+// Prints median and p95 and the server's peak memory (VmHWM from /proc) beside the targets, and
+// the server's CPU time per share with the machine's load: on a shared machine the times follow
+// the load, while CPU time per share is the figure that shows what a change saved.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { readFileSync } from 'node:fs';
+import { loadavg } from 'node:os';
 import { createServer } from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -44,6 +47,12 @@ function freePort(): Promise<number> {
 function peakMemoryMb(pid: number): number {
   const status = readFileSync(`/proc/${pid}/status`, 'utf8');
   return Number(status.match(/VmHWM:\s+(\d+)/)?.[1] ?? 0) / 1024;
+}
+
+/** User + system CPU time of a process and all its threads, s (fields 14 and 15 of proc(5) stat). */
+function cpuSeconds(pid: number): number {
+  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
+  return (Number(fields[11]) + Number(fields[12])) / 100;
 }
 
 async function startServerProcess(): Promise<{ child: ChildProcess; url: string }> {
@@ -102,6 +111,8 @@ async function main() {
     if (studio.status !== 201) throw new Error(`studio: ${studio.status}`);
     const month = await makeSharingMonth(host, slug);
     const baselineMb = peakMemoryMb(child.pid!);
+    const cpuBefore = cpuSeconds(child.pid!);
+    const loadBefore = loadavg()[0]!;
 
     const results = await Promise.all(
       Array.from({ length: shareCount }, async () => {
@@ -117,10 +128,14 @@ async function main() {
     const median = percentile(times, 50) / 1000;
     const p95 = percentile(times, 95) / 1000;
     const peak = peakMemoryMb(child.pid!);
+    const cpuPerShareMs = ((cpuSeconds(child.pid!) - cpuBefore) / shareCount) * 1000;
     say(`median ${median.toFixed(2)} s   (target < ${targets.medianS} s)`);
     say(`p95    ${p95.toFixed(2)} s`);
     say(
       `server peak memory ${peak.toFixed(0)} MB   (target < ${targets.peakMemoryMb} MB; ${baselineMb.toFixed(0)} MB before the shares)`,
+    );
+    say(
+      `server CPU ${cpuPerShareMs.toFixed(0)} ms per share; machine load ${loadBefore.toFixed(1)} before, ${loadavg()[0]!.toFixed(1)} after (1-min average)`,
     );
     say(`errors ${errors.length}${errors[0] ? `: ${errors[0].detail.slice(0, 200)}` : ''}`);
     const met = median < targets.medianS && peak < targets.peakMemoryMb && errors.length === 0;
