@@ -7,12 +7,8 @@
 // Prints median and p95 and the server's peak memory (VmHWM from /proc) beside the targets, and
 // the server's CPU time per share with the machine's load: on a shared machine the times follow
 // the load, while CPU time per share is the figure that shows what a change saved.
-import { spawn, type ChildProcess } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { loadavg } from 'node:os';
-import { createServer } from 'node:net';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { parseArgs } from 'node:util';
 import type { RunningServer } from '../../apps/server/src/server.ts';
 import { signUpVerified } from '../../apps/server/src/test-support/client.ts';
@@ -24,24 +20,13 @@ import {
   shareForm,
   sharePath,
 } from '../../apps/server/src/test-support/sharing-fixtures.ts';
+import { startServerProcess } from './server-process.ts';
 
 const { values: args } = parseArgs({ options: { shares: { type: 'string', default: '20' } } });
 const shareCount = Math.min(200, Math.max(1, Number(args.shares)));
 const targets = { medianS: 1.5, peakMemoryMb: 700 };
 
-const serverDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../apps/server');
 const say = (text: string) => console.log(`[bench:upload] ${text}`);
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
-    });
-  });
-}
 
 /** Peak resident memory of a process (VmHWM), MB. */
 function peakMemoryMb(pid: number): number {
@@ -53,38 +38,6 @@ function peakMemoryMb(pid: number): number {
 function cpuSeconds(pid: number): number {
   const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
   return (Number(fields[11]) + Number(fields[12])) / 100;
-}
-
-async function startServerProcess(): Promise<{ child: ChildProcess; url: string }> {
-  const port = await freePort();
-  const url = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, ['--import', 'tsx', 'src/main.ts'], {
-    cwd: serverDir,
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      HOST: '127.0.0.1',
-      PORT: String(port),
-      PUBLIC_ORIGIN: url,
-      LOG_LEVEL: 'warn',
-      MAIL_WORKER_ENABLED: 'false',
-      AUTH_ATTEMPTS_PER_MINUTE: '1000',
-      APPS_DIR: '',
-      REDIS_URL: '',
-    },
-    stdio: ['ignore', 'inherit', 'inherit'],
-  });
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`the server exited (${child.exitCode})`);
-    const up = await fetch(`${url}/api/health`).then(
-      (r) => r.ok,
-      () => false,
-    );
-    if (up) return { child, url };
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('the server did not answer /api/health within 60 s');
 }
 
 /** The fixtures need only the URL and the origin of a RunningServer. */
@@ -99,7 +52,11 @@ async function main() {
   say(
     `${shareCount} concurrent shares of a 4000 × 3000 JPEG (${(photo.length / 1e6).toFixed(1)} MB)`,
   );
-  const { child, url } = await startServerProcess();
+  const { child, url } = await startServerProcess({
+    NODE_ENV: 'test',
+    AUTH_ATTEMPTS_PER_MINUTE: '1000',
+    APPS_DIR: '',
+  });
   try {
     const { client: host } = await signUpVerified(asServer(url), 'bench-upload', 'Bench Host');
     const slug = `bench-up-${Date.now().toString(36)}`;
