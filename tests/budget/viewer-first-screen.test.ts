@@ -9,6 +9,7 @@ import {
   viewerDist,
   viewerLandingRoutes,
 } from '../support/viewer-bundle.ts';
+import { appOrigin } from '../support/browser.ts';
 
 // A check on the built viewer (npm test builds the apps before running the tests), not a timing:
 // the JavaScript a phone must download before the first screen stays within the budget of
@@ -50,5 +51,13 @@ describe("the viewer's first screen", () => {
       expect(js.files, route.name).toEqual(expect.arrayContaining([firstScreen.files[0]!]));
       expect(js.files, route.name).toContain(manifest[route.module]!.file);
     }
+  });
+
+  it('is served compressed to a phone that accepts gzip (the size the budget counts)', async () => {
+    const entry = firstScreen.files[0]!;
+    const res = await fetch(`${appOrigin}/${entry}`, { headers: { 'Accept-Encoding': 'gzip' } });
+    expect(res.status).toBe(200);
+    // Content-Encoding names the coding applied to the body (RFC 9110, §8.4).
+    expect(res.headers.get('content-encoding')).toBe('gzip');
   });
 });
