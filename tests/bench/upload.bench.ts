@@ -4,12 +4,11 @@
 // moment: each share is one 12-megapixel JPEG through the real route (sniffing, pixel limit,
 // orientation, sRGB, renditions, yarn-area palette, object store, rows). Each share is timed
 // from its request to the 201, which comes after the renditions are stored and the rows saved.
-// Prints median and p95 and the server's peak memory (VmHWM from /proc) beside the targets.
-import { spawn, type ChildProcess } from 'node:child_process';
+// Prints median and p95 and the server's peak memory (VmHWM from /proc) beside the targets, and
+// the server's CPU time per share with the machine's load: on a shared machine the times follow
+// the load, while CPU time per share is the figure that shows what a change saved.
 import { readFileSync } from 'node:fs';
-import { createServer } from 'node:net';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { loadavg } from 'node:os';
 import { parseArgs } from 'node:util';
 import type { RunningServer } from '../../apps/server/src/server.ts';
 import { signUpVerified } from '../../apps/server/src/test-support/client.ts';
@@ -21,24 +20,13 @@ import {
   shareForm,
   sharePath,
 } from '../../apps/server/src/test-support/sharing-fixtures.ts';
+import { startServerProcess } from './server-process.ts';
 
 const { values: args } = parseArgs({ options: { shares: { type: 'string', default: '20' } } });
 const shareCount = Math.min(200, Math.max(1, Number(args.shares)));
 const targets = { medianS: 1.5, peakMemoryMb: 700 };
 
-const serverDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../apps/server');
 const say = (text: string) => console.log(`[bench:upload] ${text}`);
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
-    });
-  });
-}
 
 /** Peak resident memory of a process (VmHWM), MB. */
 function peakMemoryMb(pid: number): number {
@@ -46,39 +34,10 @@ function peakMemoryMb(pid: number): number {
   return Number(status.match(/VmHWM:\s+(\d+)/)?.[1] ?? 0) / 1024;
 }
 
-async function startServerProcess(): Promise<{ child: ChildProcess; url: string }> {
-  const port = await freePort();
-  const url = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, ['--import', 'tsx', 'src/main.ts'], {
-    cwd: serverDir,
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      HOST: '127.0.0.1',
-      PORT: String(port),
-      PUBLIC_ORIGIN: url,
-      LOG_LEVEL: 'warn',
-      MAIL_WORKER_ENABLED: 'false',
-      AUTH_ATTEMPTS_PER_MINUTE: '1000',
-      // One host shares every skein here; the limits are not what is measured.
-      SHARES_PER_HOUR: '1000',
-      SHARE_STORAGE_QUOTA_BYTES: String(2 ** 40),
-      APPS_DIR: '',
-      REDIS_URL: '',
-    },
-    stdio: ['ignore', 'inherit', 'inherit'],
-  });
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`the server exited (${child.exitCode})`);
-    const up = await fetch(`${url}/api/health`).then(
-      (r) => r.ok,
-      () => false,
-    );
-    if (up) return { child, url };
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('the server did not answer /api/health within 60 s');
+/** User + system CPU time of a process and all its threads, s (fields 14 and 15 of proc(5) stat). */
+function cpuSeconds(pid: number): number {
+  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
+  return (Number(fields[11]) + Number(fields[12])) / 100;
 }
 
 /** The fixtures need only the URL and the origin of a RunningServer. */
@@ -93,7 +52,14 @@ async function main() {
   say(
     `${shareCount} concurrent shares of a 4000 × 3000 JPEG (${(photo.length / 1e6).toFixed(1)} MB)`,
   );
-  const { child, url } = await startServerProcess();
+  const { child, url } = await startServerProcess({
+    NODE_ENV: 'test',
+    AUTH_ATTEMPTS_PER_MINUTE: '1000',
+    // One host shares every skein here; the limits are not what is measured.
+    SHARES_PER_HOUR: '1000',
+    SHARE_STORAGE_QUOTA_BYTES: String(2 ** 40),
+    APPS_DIR: '',
+  });
   try {
     const { client: host } = await signUpVerified(asServer(url), 'bench-upload', 'Bench Host');
     const slug = `bench-up-${Date.now().toString(36)}`;
@@ -105,6 +71,8 @@ async function main() {
     if (studio.status !== 201) throw new Error(`studio: ${studio.status}`);
     const month = await makeSharingMonth(host, slug);
     const baselineMb = peakMemoryMb(child.pid!);
+    const cpuBefore = cpuSeconds(child.pid!);
+    const loadBefore = loadavg()[0]!;
 
     const results = await Promise.all(
       Array.from({ length: shareCount }, async () => {
@@ -120,10 +88,14 @@ async function main() {
     const median = percentile(times, 50) / 1000;
     const p95 = percentile(times, 95) / 1000;
     const peak = peakMemoryMb(child.pid!);
+    const cpuPerShareMs = ((cpuSeconds(child.pid!) - cpuBefore) / shareCount) * 1000;
     say(`median ${median.toFixed(2)} s   (target < ${targets.medianS} s)`);
     say(`p95    ${p95.toFixed(2)} s`);
     say(
       `server peak memory ${peak.toFixed(0)} MB   (target < ${targets.peakMemoryMb} MB; ${baselineMb.toFixed(0)} MB before the shares)`,
+    );
+    say(
+      `server CPU ${cpuPerShareMs.toFixed(0)} ms per share; machine load ${loadBefore.toFixed(1)} before, ${loadavg()[0]!.toFixed(1)} after (1-min average)`,
     );
     say(`errors ${errors.length}${errors[0] ? `: ${errors[0].detail.slice(0, 200)}` : ''}`);
     const met = median < targets.medianS && peak < targets.peakMemoryMb && errors.length === 0;

@@ -39,6 +39,8 @@ export interface ProcessOptions {
 // served). Twenty shares at once then finish one after another instead of all at the end, and
 // memory stays bounded.
 sharp.concurrency(1);
+// Every upload is a new buffer, so libvips' operation cache never hits; it would only hold memory.
+sharp.cache(false);
 const IMAGE_SLOTS = Math.max(1, availableParallelism());
 let busy = 0;
 const waiting: (() => void)[] = [];
@@ -128,6 +130,8 @@ export async function processImage(
         sequentialRead: true,
       }).rotate();
       const web = await render(decoded, WEB_MAX_PX);
+      // The thumbnail and the palette come from the web rendition, never the original: decoding
+      // the 1600 px JPEG at a quarter scale (shrink-on-load again) costs a fraction of a phone photo.
       const thumb = await render(sharp(web.data), THUMB_MAX_PX);
       const palette = options.swatchCount > 0 ? await paletteOf(web.data, options.swatchCount) : [];
       return { web, thumb, palette };

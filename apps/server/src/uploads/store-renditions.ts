@@ -14,8 +14,24 @@ export function newRenditionKeys(studioId: string): RenditionKeys {
 }
 
 /**
- * Puts both renditions, then records them with `insertRow`. If a put or the insert fails, both
- * keys are deleted again (a failed put may still have written), so no orphan object is left.
+ * Puts objects side by side and waits for every put to settle; throws the first failure. Waiting
+ * for all before throwing matters: a caller that deletes on failure must not race a put that is
+ * still writing.
+ */
+async function putAll(
+  store: ObjectStore,
+  objects: { key: string; rendition: Rendition }[],
+): Promise<void> {
+  const settled = await Promise.allSettled(
+    objects.map(({ key, rendition }) => store.put(key, rendition.data, rendition.contentType)),
+  );
+  const failed = settled.find((s) => s.status === 'rejected');
+  if (failed) throw failed.reason;
+}
+
+/**
+ * Puts both renditions at once, then records them with `insertRow`. If a put or the insert fails,
+ * both keys are deleted again (a failed put may still have written), so no orphan object is left.
  */
 export async function storeRenditions<T>(
   store: ObjectStore,
@@ -24,8 +40,10 @@ export async function storeRenditions<T>(
   insertRow: () => Promise<T>,
 ): Promise<T> {
   try {
-    await store.put(keys.webKey, renditions.web.data, renditions.web.contentType);
-    await store.put(keys.thumbKey, renditions.thumb.data, renditions.thumb.contentType);
+    await putAll(store, [
+      { key: keys.webKey, rendition: renditions.web },
+      { key: keys.thumbKey, rendition: renditions.thumb },
+    ]);
     return await insertRow();
   } catch (error) {
     await Promise.allSettled([store.delete(keys.webKey), store.delete(keys.thumbKey)]);
