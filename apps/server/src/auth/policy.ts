@@ -30,6 +30,10 @@ export const studioPolicy = {
   // The recap running order: helpers read it, the host builds it.
   'recap:read': ['moderator', 'host'],
   'recap:edit': ['host'],
+  // The archive (bath records, what went into each pot, dye again against the shelf) is the
+  // studio's production record: helpers read it, the host writes the bath records.
+  'archive:read': ['moderator', 'host'],
+  'archive:edit': ['host'],
 } as const satisfies Record<string, readonly StudioStanding[]>;
 
 export type StudioAction = keyof typeof studioPolicy;
