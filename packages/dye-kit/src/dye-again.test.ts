@@ -82,7 +82,10 @@ describe('a recipe from the dye log (common practice)', () => {
   });
 
   it('a host acid amount scales with the new skein weight', () => {
-    const planned: Recipe = { ...teal, acid: { acid: 'vinegar', acidStrengthPct: 5, amountMl: 60 } };
+    const planned: Recipe = {
+      ...teal,
+      acid: { acid: 'vinegar', acidStrengthPct: 5, amountMl: 60 },
+    };
     const { recipe } = recipeFromLog(
       { planned, loggedAmounts: [240, 90], fiberWeightDyedG: 300 },
       50,

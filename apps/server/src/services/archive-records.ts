@@ -151,7 +151,12 @@ export async function saveBathRecord(
       set: values,
     })
     .returning();
-  return toBathRecord(colorwayId, row!.snapshot?.colorwayName ?? colorway.name, plannedDay(colorway, row), row);
+  return toBathRecord(
+    colorwayId,
+    row!.snapshot?.colorwayName ?? colorway.name,
+    plannedDay(colorway, row),
+    row,
+  );
 }
 
 export interface MonthSnapshot {
@@ -176,7 +181,9 @@ export async function monthSnapshots(
   const baseIds = list.map((c) => c.baseId).filter((id) => id !== null);
   const potIds = list.map((c) => c.potId).filter((id) => id !== null);
   const jarIds = list.flatMap((c) =>
-    c.recipeLines.flatMap((l) => (l.kind === 'stock' && l.stockSolutionId ? [l.stockSolutionId] : [])),
+    c.recipeLines.flatMap((l) =>
+      l.kind === 'stock' && l.stockSolutionId ? [l.stockSolutionId] : [],
+    ),
   );
   const [baseRows, potRows, jarRows] = await Promise.all([
     baseIds.length ? db.select().from(bases).where(inArray(bases.id, baseIds)) : [],

@@ -187,7 +187,10 @@ export async function archivedColorwayDetail(
       const reached =
         strength !== null && line.loggedAmount !== null
           ? depthOfShade({
-              dyeMassG: dyeMassInStockG({ stockStrengthPct: strength, volumeMl: line.loggedAmount }),
+              dyeMassG: dyeMassInStockG({
+                stockStrengthPct: strength,
+                volumeMl: line.loggedAmount,
+              }),
               weightOfGoodsG: fiberG,
             })
           : null;
@@ -221,7 +224,12 @@ export async function archivedColorwayDetail(
 async function shelfChecks(
   db: Database,
   studioId: string,
-  needs: Array<{ dyeId: string | null; dyeName: string; stockStrengthPct: number; neededMl: number }>,
+  needs: Array<{
+    dyeId: string | null;
+    dyeName: string;
+    stockStrengthPct: number;
+    neededMl: number;
+  }>,
 ): Promise<ShelfCheck[]> {
   const dyeIds = needs.map((n) => n.dyeId).filter((id) => id !== null);
   const jars = dyeIds.length
@@ -304,7 +312,9 @@ export async function dyeAgain(
     unit: scaled.lines[i]!.unit,
     from: rebuilt.lines[i]!.from,
     depthOfShadePct:
-      rebuilt.lines[i]!.depthOfShadePct === null ? null : round(rebuilt.lines[i]!.depthOfShadePct!, 3),
+      rebuilt.lines[i]!.depthOfShadePct === null
+        ? null
+        : round(rebuilt.lines[i]!.depthOfShadePct!, 3),
     amountPer100g:
       rebuilt.lines[i]!.amountPer100g === null ? null : round(rebuilt.lines[i]!.amountPer100g!, 3),
     stockStrengthPct: line.kind === 'stock' ? line.stockStrengthPct : null,
