@@ -251,10 +251,7 @@ export function BatchSheet({
         <StepCaution kind="hotBath" />
         <StepCaution kind="acid" />
         <StepCaution kind="powder" />
-        <p>
-          {sheet.safetyNote} The dye maker’s safety data sheet, local wastewater rules and local
-          codes come first.
-        </p>
+        <p>{sheet.safetyNote} Local wastewater rules and local codes come first too.</p>
       </section>
     </article>
   );
