@@ -7,6 +7,7 @@ import type { AppDeps } from './deps.ts';
 import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
 import { sameOriginOnly } from './http/origin-check.ts';
 import { accountRouter } from './routes/account.ts';
+import { archiveRouter } from './routes/archive.ts';
 import { dyeAlongsRouter } from './routes/dye-alongs.ts';
 import { galleryRouter } from './routes/gallery.ts';
 import { dyeLogRouter } from './routes/dye-log.ts';
@@ -46,6 +47,7 @@ export const apiRouters = [
   galleryRouter,
   reviewMailUnsubscribeRouter,
   storageRouter,
+  archiveRouter,
 ];
 
 /** better-auth answers everything under this path itself (sign-up, sign-in, verify, reset, delete). */

@@ -3,6 +3,7 @@ import { connectDatabase } from '@vatside/db/client';
 import { demoPassword, demoPeople } from '@vatside/db/demo-data';
 import { seedDemo } from '@vatside/db/seed';
 import { loadConfig } from './config.ts';
+import { seedPastMonth } from './seed/past-month.ts';
 import { seedTidePool } from './seed/tide-pool.ts';
 import { createObjectStore } from './storage/object-store.ts';
 
@@ -14,6 +15,7 @@ const objectStore = createObjectStore(config);
 try {
   await seedDemo(handle.db, { hashPassword });
   await seedTidePool({ db: handle.db, objectStore, maxPixels: config.UPLOAD_MAX_PIXELS });
+  await seedPastMonth({ db: handle.db, objectStore, maxPixels: config.UPLOAD_MAX_PIXELS });
 } finally {
   objectStore.close();
   await handle.close();

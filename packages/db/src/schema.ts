@@ -70,3 +70,4 @@ export const studioInvitations = pgTable(
 export * from './live-schema.ts';
 export * from './sharing-schema.ts';
 export * from './live-log-schema.ts';
+export * from './archive-schema.ts';

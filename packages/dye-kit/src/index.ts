@@ -46,6 +46,14 @@ export {
   type FoodColorUnit,
   type FoodColorAmount,
 } from './dye.ts';
+export {
+  recipeFromLog,
+  stockShortfall,
+  type LoggedRecipe,
+  type RebuiltLine,
+  type RebuiltRecipe,
+  type StockShortfall,
+} from './dye-again.ts';
 export { acidFor, type AcidKind, type AcidInput, type AcidAmount } from './acid.ts';
 export {
   validateRecipe,

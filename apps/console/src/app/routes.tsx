@@ -44,6 +44,15 @@ export const routes: RouteObject[] = [
                 path: 'dye-alongs/:dyeAlongId/recap',
                 lazy: () => import('./routes/studio-recap.tsx'),
               },
+              {
+                path: 'dye-alongs/:dyeAlongId/bath-records',
+                lazy: () => import('./routes/dye-along-bath-records.tsx'),
+              },
+              { path: 'archive', lazy: () => import('./routes/studio-archive.tsx') },
+              {
+                path: 'archive/:archivedColorwayId',
+                lazy: () => import('./routes/studio-archived-colorway.tsx'),
+              },
             ],
           },
           { path: 'join/:token', lazy: () => import('./routes/join.tsx') },
@@ -58,6 +67,13 @@ export const routes: RouteObject[] = [
     errorElement: <RouteError />,
     hydrateFallbackElement: <LoadingBlock label="Opening the recipe card…" />,
     lazy: () => import('./routes/dye-along-recipe-card.tsx'),
+  },
+  {
+    // Dye again: a sheet to print, like the recipe card.
+    path: '/studios/:slug/archive/:archivedColorwayId/batch-sheet',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <LoadingBlock label="Opening the batch sheet…" />,
+    lazy: () => import('./routes/archive-batch-sheet.tsx'),
   },
   {
     // The pot board runs full width, without the console's header: the pots need the room.

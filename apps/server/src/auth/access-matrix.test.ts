@@ -240,6 +240,32 @@ function liveLogRoutes(): Record<string, RouteCase> {
 }
 
 /**
+ * The archive (issue 11): helpers read bath records, the archive and dye again; only the host
+ * writes a bath record (the matrix's month is live, so the host's write lands).
+ */
+function archiveRoutes(): Record<string, RouteCase> {
+  const at = (c: Cast, rest: string) => `/api/studios/${c.slug}${rest}`;
+  const records = (c: Cast) => at(c, `/dye-alongs/${live.dyeAlongId}/bath-records`);
+  const read = (rest: () => string): RouteCase => ({ expect: staff, path: (c) => at(c, rest()) });
+  return {
+    'GET /api/studios/:slug/dye-alongs/:dyeAlongId/bath-records': {
+      expect: staff,
+      path: records,
+    },
+    'PUT /api/studios/:slug/dye-alongs/:dyeAlongId/bath-records/:colorwayId': {
+      expect: hostOnly,
+      path: (c) => `${records(c)}/${live.potId}`,
+      body: () => ({ temperatureReachedC: 85, bathExhausted: true }),
+    },
+    'GET /api/studios/:slug/archive': read(() => '/archive?hex=%231f6f78'),
+    'GET /api/studios/:slug/archive/:archivedColorwayId': read(() => `/archive/${randomUUID()}`),
+    'GET /api/studios/:slug/archive/:archivedColorwayId/dye-again': read(
+      () => `/archive/${randomUUID()}/dye-again?baseId=${randomUUID()}&skeins=2`,
+    ),
+  };
+}
+
+/**
  * Sharing, review, gallery and recap (issues 9 and 10): members share and manage only their own
  * skeins; helpers and the host review; visitors read the public gallery and approved photos.
  */
@@ -399,6 +425,7 @@ const routes: Record<string, RouteCase> = {
   ...dyeAlongRoutes(),
   ...liveRoutes(),
   ...liveLogRoutes(),
+  ...archiveRoutes(),
 };
 
 type SocketExpect = 'ok' | 'UNAUTHENTICATED' | 'FORBIDDEN' | 'NOT_FOUND';

@@ -32,6 +32,10 @@ export const studioPolicy = {
   'recap:edit': ['host'],
   // What the studio keeps in the object store, and who shares the most: the host's to see.
   'storage:read': ['host'],
+  // The archive (bath records, what went into each pot, dye again against the shelf) is the
+  // studio's production record: helpers read it, the host writes the bath records.
+  'archive:read': ['moderator', 'host'],
+  'archive:edit': ['host'],
 } as const satisfies Record<string, readonly StudioStanding[]>;
 
 export type StudioAction = keyof typeof studioPolicy;

@@ -26,6 +26,7 @@ import {
   withdrawDyeAlongMails,
   type Tx,
 } from '../jobs/dye-along-mail-queue.ts';
+import { monthSnapshots, writeMonthSnapshots } from './archive-records.ts';
 import { isUnderway, nextStatuses, transitionProblems } from './dye-along-rules.ts';
 import { isoTimestamps, pageInfo, unknownReference } from './workbench-common.ts';
 import { instantFromLocal, zonedTime } from './zoned-time.ts';
@@ -374,6 +375,8 @@ export async function transitionDyeAlong(
   to: DyeAlongStatus,
   now = new Date(),
 ): Promise<DyeAlongDetail> {
+  // Archiving freezes each colorway's plan and dye log; read them first, write them with the status.
+  const snapshots = to === 'archived' ? await monthSnapshots(db, studioId, id) : [];
   await db.transaction(async (tx) => {
     const row = await lockedRow(tx, studioId, id);
     const [counted] = await tx
@@ -404,6 +407,7 @@ export async function transitionDyeAlong(
         ...(to === 'sharing' && !row.shareOpensAt ? { shareOpensAt: now } : {}),
       })
       .where(eq(dyeAlongs.id, id));
+    if (to === 'archived') await writeMonthSnapshots(tx, studioId, id, snapshots, now);
     if (to === 'announced') await enqueueDyeAlongMails(tx, row, now);
     if (row.status === 'announced' && to === 'draft') await withdrawDyeAlongMails(tx, id);
   });

@@ -79,6 +79,16 @@ export function Component() {
           </ul>
         )}
       </Panel>
+      {['live', 'sharing', 'recap', 'archived'].includes(dyeAlong.status) ? (
+        <Panel
+          title="Bath records"
+          intro="After the live session: bath volume, temperature, time, lots, photos and notes for each colorway, kept in the archive."
+        >
+          <Link to="bath-records" className={textLinkClass}>
+            {canEdit ? 'Fill in the bath records' : 'Read the bath records'}
+          </Link>
+        </Panel>
+      ) : null}
       <Panel title="Supplies and prep">
         <SuppliesPanel
           slug={slug}

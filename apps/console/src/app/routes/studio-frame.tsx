@@ -78,6 +78,7 @@ const workbenchSections = [
   { to: 'calculators', label: 'Calculators' },
   { to: 'inspiration', label: 'Inspiration' },
   { to: 'dye-alongs', label: 'Dye-alongs' },
+  { to: 'archive', label: 'Archive' },
 ] as const;
 
 /** The planning screens of the studio, one tap apart. */
