@@ -40,6 +40,8 @@ export const routes: RouteObject[] = [
                 path: 'dye-alongs/:dyeAlongId',
                 lazy: () => import('./routes/studio-dye-along.tsx'),
               },
+              { path: 'review', lazy: () => import('./routes/studio-review.tsx') },
+              { path: 'review/audit', lazy: () => import('./routes/studio-review-audit.tsx') },
             ],
           },
           { path: 'join/:token', lazy: () => import('./routes/join.tsx') },
