@@ -61,11 +61,13 @@ export class ApiPerson {
     const headers: Record<string, string> = { origin: appOrigin };
     if (this.cookies.size)
       headers.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
-    if (body !== undefined) headers['content-type'] = 'application/json';
+    // A FormData body (a multipart upload) sets its own content type.
+    const form = body instanceof FormData;
+    if (body !== undefined && !form) headers['content-type'] = 'application/json';
     const res = await fetch(`${appOrigin}${path}`, {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : form ? body : JSON.stringify(body),
       redirect: 'manual',
     });
     for (const line of res.headers.getSetCookie()) {

@@ -1,10 +1,11 @@
-import { and, eq, inArray } from '@vatside/db/sql';
+import { and, eq, isNull } from '@vatside/db/sql';
 import { reviewDecisionSchema, type ReasonTemplateId } from '@vatside/contracts/review';
 import { submissionCreateSchema, type SubmissionStatus } from '@vatside/contracts/submissions';
 import { tidePoolDyeAlong, tidePoolStudioSlug } from '@vatside/db/demo-data';
 import {
   colorways,
   dyeAlongs,
+  reviewMailOptOuts,
   reviewMailOutbox,
   studioMembers,
   studios,
@@ -243,7 +244,6 @@ export async function seedTidePoolShares(deps: TidePoolSeedDeps): Promise<void> 
         .where(eq(colorways.studioId, studio.id))
     ).map((c) => [c.name, c.id]),
   );
-  const seeded: string[] = [];
   for (const plan of tidePoolShares) {
     const [sharer] = await db.select({ id: user.id }).from(user).where(eq(user.email, plan.email));
     if (!sharer) continue;
@@ -253,6 +253,14 @@ export async function seedTidePoolShares(deps: TidePoolSeedDeps): Promise<void> 
       .where(and(eq(submissions.dyeAlongId, month.id), eq(submissions.sharerUserId, sharer.id)));
     if (already) continue;
 
+    // The decisions queue e-mails; the invented people are not mailed about them. Their own
+    // opt-out holds the mails back while the seed decides (the mail job checks it just before
+    // sending, should a server already run on this database); it is lifted again afterwards.
+    const [held] = await db
+      .insert(reviewMailOptOuts)
+      .values({ studioId: studio.id, userId: sharer.id })
+      .onConflictDoNothing()
+      .returning({ userId: reviewMailOptOuts.userId });
     const dyeAlong = await dyeAlongOpenForSharing(db, studio.id, month.id, now);
     const shared = await shareSkein(db, deps.objectStore, {
       studio: { id: studio.id, slug: studio.slug },
@@ -279,14 +287,16 @@ export async function seedTidePoolShares(deps: TidePoolSeedDeps): Promise<void> 
         reviewDecisionSchema.parse(decision),
       );
     }
-    seeded.push(shared.id);
-  }
-
-  // The decisions queued their e-mails; the demo's invented people are not mailed about them.
-  if (seeded.length > 0) {
     await db
       .update(reviewMailOutbox)
       .set({ skippedAt: now, skipReason: 'demoSeed' })
-      .where(inArray(reviewMailOutbox.submissionId, seeded));
+      .where(and(eq(reviewMailOutbox.submissionId, shared.id), isNull(reviewMailOutbox.skippedAt)));
+    if (held) {
+      await db
+        .delete(reviewMailOptOuts)
+        .where(
+          and(eq(reviewMailOptOuts.studioId, studio.id), eq(reviewMailOptOuts.userId, sharer.id)),
+        );
+    }
   }
 }
