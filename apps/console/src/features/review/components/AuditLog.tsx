@@ -38,7 +38,7 @@ export function AuditLog({ slug }: { slug: string }) {
       cell: ({ row }) => (
         <span className="whitespace-nowrap">
           {statusNames[row.original.fromStatus]}
-          <span aria-label=" to "> → </span>
+          {' → '}
           {statusNames[row.original.toStatus]}
         </span>
       ),
