@@ -27,19 +27,19 @@ function skeinSvg(look: SkeinLook): string {
   const left = WIDTH * SKEIN_AREA.x + 60;
   const right = WIDTH * (SKEIN_AREA.x + SKEIN_AREA.width) - 60;
   const cy = HEIGHT * (SKEIN_AREA.y + SKEIN_AREA.height / 2);
-  const twists = 9;
+  const twists = 7;
   const step = (right - left) / twists;
   const strands: string[] = [];
   for (let i = 0; i < twists; i++) {
     const cx = left + step * (i + 0.5);
     for (let ply = 0; ply < 2; ply++) {
       const color = look.yarn[(i * 2 + ply) % look.yarn.length]!;
-      const angle = ply === 0 ? -28 : 28;
+      const angle = ply === 0 ? -32 : 32;
       strands.push(
-        `<ellipse cx="${cx.toFixed(1)}" cy="${cy}" rx="${(step * 0.75).toFixed(1)}" ry="${(HEIGHT * 0.17).toFixed(1)}" transform="rotate(${angle} ${cx.toFixed(1)} ${cy})" fill="${color}" stroke="#00000033" stroke-width="3"/>`,
+        `<ellipse cx="${cx.toFixed(1)}" cy="${cy}" rx="${(step * 0.75).toFixed(1)}" ry="${(HEIGHT * 0.25).toFixed(1)}" transform="rotate(${angle} ${cx.toFixed(1)} ${cy})" fill="${color}" stroke="#00000033" stroke-width="3"/>`,
       );
       // Fine lines for the yarn's strands.
-      for (let s = -2; s <= 2; s++) {
+      for (let s = -4; s <= 4; s++) {
         strands.push(
           `<line x1="${(cx - step * 0.55).toFixed(1)}" y1="${cy + s * 14}" x2="${(cx + step * 0.55).toFixed(1)}" y2="${cy + s * 14}" transform="rotate(${angle} ${cx.toFixed(1)} ${cy})" stroke="#ffffff2a" stroke-width="3"/>`,
         );
@@ -47,13 +47,14 @@ function skeinSvg(look: SkeinLook): string {
     }
   }
   // The loop at one end, where the hank folds back on itself.
-  const loop = `<ellipse cx="${right + 30}" cy="${cy}" rx="70" ry="${HEIGHT * 0.12}" fill="none" stroke="${look.yarn[0]}" stroke-width="34"/>`;
+  const loop = `<ellipse cx="${right + 30}" cy="${cy}" rx="80" ry="${HEIGHT * 0.17}" fill="none" stroke="${look.yarn[0]}" stroke-width="34"/>`;
   const dim = look.dim
     ? `<rect width="${WIDTH}" height="${HEIGHT}" fill="#000" opacity="0.62"/>`
     : '';
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${WIDTH}" height="${HEIGHT}">
 <rect width="${WIDTH}" height="${HEIGHT}" fill="${look.surface}"/>
 <rect y="${HEIGHT * 0.86}" width="${WIDTH}" height="${HEIGHT * 0.14}" fill="#00000018"/>
+<ellipse cx="${WIDTH / 2}" cy="${cy + HEIGHT * 0.24}" rx="${(right - left) / 2 + 60}" ry="28" fill="#0000002a"/>
 ${loop}${strands.join('')}${dim}</svg>`;
 }
 

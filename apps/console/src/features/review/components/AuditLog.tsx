@@ -48,7 +48,7 @@ export function AuditLog({ slug }: { slug: string }) {
       id: 'skein',
       header: 'Skein',
       cell: ({ row }) => (
-        <span className="text-sm">
+        <span className="block text-sm whitespace-nowrap">
           {titles.get(row.original.dyeAlongId) ?? 'Dye-along'}
           <span className="block font-mono text-vat-800">
             #{row.original.submissionId.slice(0, 8)}

@@ -7,7 +7,7 @@ export function KeyLegend() {
       <h2 id="review-keys-title" className="font-display text-xl font-semibold">
         Keys
       </h2>
-      <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1.5">
+      <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1.5 md:grid-cols-[auto_1fr_auto_1fr] lg:grid-cols-[auto_1fr]">
         {reviewKeyLegend.map((shortcut) => (
           <div key={shortcut.keys} className="contents">
             <dt>

@@ -196,7 +196,7 @@ export function ReviewQueue({ slug }: { slug: string }) {
   const selectedShown = items.filter((s) => selected.has(s.id)).length;
 
   return (
-    <div className="grid items-start gap-6 lg:grid-cols-[1fr_17rem]">
+    <div className="grid items-start gap-6 lg:grid-cols-[1fr_19rem]">
       <div className="min-w-0 space-y-4">
         <div className="grid gap-3 sm:grid-cols-2">
           <MonthFilter
@@ -288,7 +288,7 @@ export function ReviewQueue({ slug }: { slug: string }) {
           }
         </QueryView>
       </div>
-      <aside className="rounded-card border border-wool-200 bg-wool-50 p-4 lg:sticky lg:top-4">
+      <aside className="order-first rounded-card border border-wool-200 bg-wool-50 p-4 lg:sticky lg:top-4 lg:order-none">
         <KeyLegend />
       </aside>
       {asking ? (
