@@ -1,7 +1,7 @@
 import { and, eq, isNull } from '@vatside/db/sql';
 import { reviewDecisionSchema, type ReasonTemplateId } from '@vatside/contracts/review';
 import { submissionCreateSchema, type SubmissionStatus } from '@vatside/contracts/submissions';
-import { tidePoolDyeAlong, tidePoolStudioSlug } from '@vatside/db/demo-data';
+import { demoPeople, tidePoolDyeAlong, tidePoolStudioSlug } from '@vatside/db/demo-data';
 import {
   colorways,
   dyeAlongs,
@@ -219,12 +219,19 @@ export async function seedTidePoolShares(deps: TidePoolSeedDeps): Promise<void> 
     .from(dyeAlongs)
     .where(and(eq(dyeAlongs.studioId, studio.id), eq(dyeAlongs.title, tidePoolDyeAlong.title)));
   if (!month) throw new Error('The tide pool month is missing; seed it first.');
+  // The studio's first moderator in the demo cast decides.
+  const moderatorEmail = demoPeople.find((p) => p.roles[tidePoolStudioSlug] === 'moderator')?.email;
   const [moderator] = await db
     .select({ userId: studioMembers.userId })
     .from(studioMembers)
     .innerJoin(user, eq(user.id, studioMembers.userId))
-    .where(and(eq(studioMembers.studioId, studio.id), eq(studioMembers.role, 'moderator')))
-    .orderBy(user.email);
+    .where(
+      and(
+        eq(studioMembers.studioId, studio.id),
+        eq(studioMembers.role, 'moderator'),
+        eq(user.email, moderatorEmail ?? ''),
+      ),
+    );
   if (!moderator) throw new Error('The demo studio has no moderator.');
 
   // The demo month stays announced, so the live session can still be shown from the start. Its
