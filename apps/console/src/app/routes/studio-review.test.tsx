@@ -61,6 +61,11 @@ describe('The review queue, by keyboard', () => {
     const dialog = screen.getByRole('dialog', { name: /Ask for a change: Wren Alder’s skein/ });
     await user.keyboard('3');
     expect(within(dialog).getByRole('radio', { name: /Photo blurry/ })).toBeChecked();
+    // Focus stays inside the dialog: back from the chosen reason wraps round to Cancel.
+    await user.keyboard('{Shift>}{Tab}{/Shift}');
+    expect(within(dialog).getByRole('button', { name: 'Cancel' })).toHaveFocus();
+    await user.keyboard('{Tab}');
+    expect(within(dialog).getByRole('radio', { name: /Photo blurry/ })).toHaveFocus();
     await user.keyboard('{Enter}');
     await screen.findByText('Asked for a change: Wren Alder’s skein.');
     expect(api.decisions).toEqual([

@@ -4,6 +4,26 @@ import { useEffect, useId, useRef, useState, type FormEvent, type KeyboardEvent 
 import type { DecisionInput } from '../api.ts';
 import { reasonNames } from '../names.ts';
 
+/** Tab and Shift+Tab wrap around inside the dialog, as in any modal. */
+function keepFocusInside(event: KeyboardEvent<HTMLDivElement>) {
+  // Tab reaches a radio group at its checked radio only.
+  const focusable = [
+    ...event.currentTarget.querySelectorAll<HTMLElement>('input, textarea, button'),
+  ].filter(
+    (el) =>
+      !el.hasAttribute('disabled') &&
+      !(el instanceof HTMLInputElement && el.type === 'radio' && !el.checked),
+  );
+  const [first, last] = [focusable[0], focusable.at(-1)];
+  if (event.shiftKey && document.activeElement === first) {
+    event.preventDefault();
+    last?.focus();
+  } else if (!event.shiftKey && document.activeElement === last) {
+    event.preventDefault();
+    first?.focus();
+  }
+}
+
 export interface ReasonAsk {
   decision: 'needsChanges' | 'reject';
   /** Whose skein(s), e.g. "Ada Fenwick’s skein" or "3 selected skeins". */
@@ -45,6 +65,7 @@ export function ReasonDialog({
       onCancel();
       return;
     }
+    if (event.key === 'Tab') return keepFocusInside(event);
     if (event.target instanceof HTMLTextAreaElement) return;
     const picked = REVIEW_REASON_TEMPLATES[Number(event.key) - 1];
     if (/^[1-9]$/.test(event.key) && picked) {
