@@ -5,6 +5,7 @@ import { seedDemo } from '@vatside/db/seed';
 import { loadConfig } from './config.ts';
 import { seedPastMonth } from './seed/past-month.ts';
 import { seedTidePool } from './seed/tide-pool.ts';
+import { seedTidePoolShares } from './seed/tide-pool-shares.ts';
 import { createObjectStore } from './storage/object-store.ts';
 
 // Lives in the server package because demo passwords are hashed the way sign-in checks them,
@@ -16,6 +17,7 @@ try {
   await seedDemo(handle.db, { hashPassword });
   await seedTidePool({ db: handle.db, objectStore, maxPixels: config.UPLOAD_MAX_PIXELS });
   await seedPastMonth({ db: handle.db, objectStore, maxPixels: config.UPLOAD_MAX_PIXELS });
+  await seedTidePoolShares({ db: handle.db, objectStore, maxPixels: config.UPLOAD_MAX_PIXELS });
 } finally {
   objectStore.close();
   await handle.close();

@@ -53,6 +53,8 @@ export const routes: RouteObject[] = [
                 path: 'archive/:archivedColorwayId',
                 lazy: () => import('./routes/studio-archived-colorway.tsx'),
               },
+              { path: 'review', lazy: () => import('./routes/studio-review.tsx') },
+              { path: 'review/audit', lazy: () => import('./routes/studio-review-audit.tsx') },
             ],
           },
           { path: 'join/:token', lazy: () => import('./routes/join.tsx') },

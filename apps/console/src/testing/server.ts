@@ -14,6 +14,10 @@ export const server = setupServer(
   http.get('/api/health', () => HttpResponse.json(healthyReport)),
   // The host's members page shows the storage panel.
   http.get('/api/studios/:slug/storage', () => HttpResponse.json(kelpwhistleStorage)),
+  // The studio's navigation counts the skeins waiting for review: none unless a test says so.
+  http.get('/api/studios/:slug/review/submissions', () =>
+    HttpResponse.json({ items: [], page: { limit: 1, offset: 0, total: 0 } }),
+  ),
 );
 
 /** From now on, /api/me answers as this person. */

@@ -3,6 +3,7 @@ import { RequireSignIn } from '@vatside/ui/account/RequireSignIn';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { NavLink, Outlet, useParams } from 'react-router-dom';
+import { ReviewNavLink } from '../../features/review/components/ReviewNavLink.tsx';
 import { studioQueryOptions } from '../../features/studios/api.ts';
 
 /** Every /studios/:slug screen: signed in, and a host or moderator of that studio. */
@@ -65,7 +66,7 @@ function StudioGate({ slug }: { slug: string }) {
           {studio.tagline ? <p className="text-lg text-vat-800">{studio.tagline}</p> : null}
         </div>
       </div>
-      <WorkbenchNav />
+      <WorkbenchNav slug={slug} />
       <Outlet />
     </div>
   );
@@ -81,26 +82,24 @@ const workbenchSections = [
   { to: 'archive', label: 'Archive' },
 ] as const;
 
-/** The planning screens of the studio, one tap apart. */
-function WorkbenchNav() {
+const navClass = (isActive: boolean) =>
+  [
+    'inline-flex min-h-12 shrink-0 items-center rounded-xl border-2 px-4 font-bold whitespace-nowrap',
+    isActive
+      ? 'border-vat-800 bg-vat-800 text-wool-50'
+      : 'border-vat-800 bg-wool-50 text-vat-900 hover:bg-vat-100',
+  ].join(' ');
+
+/** The planning screens of the studio, one tap apart, and the review queue. */
+function WorkbenchNav({ slug }: { slug: string }) {
   return (
     <nav aria-label="Workbench" className="flex flex-wrap gap-2">
       {workbenchSections.map((section) => (
-        <NavLink
-          key={section.to}
-          to={section.to}
-          className={({ isActive }) =>
-            [
-              'inline-flex min-h-12 shrink-0 items-center rounded-xl border-2 px-4 font-bold whitespace-nowrap',
-              isActive
-                ? 'border-vat-800 bg-vat-800 text-wool-50'
-                : 'border-vat-800 bg-wool-50 text-vat-900 hover:bg-vat-100',
-            ].join(' ')
-          }
-        >
+        <NavLink key={section.to} to={section.to} className={({ isActive }) => navClass(isActive)}>
           {section.label}
         </NavLink>
       ))}
+      <ReviewNavLink slug={slug} className={navClass} />
     </nav>
   );
 }
