@@ -9,7 +9,7 @@ import {
   saveScreenshot,
   watchPage,
 } from '../support/browser.ts';
-import { encodePng } from '../support/images.ts';
+import { drawSkeinJpeg, encodePng } from '../support/images.ts';
 
 // One whole month in the browser against the real services, in the order the host lives it:
 // plan → announce → go live → share → review → recap → archive → dye again. Each stage saves a
@@ -28,6 +28,8 @@ const hostZone = 'America/Halifax';
 const api = (rest: string) => `/api/studios/${slug}${rest}`;
 const problems: string[] = [];
 let dyeAlongId = '';
+
+const poolWaterHex = '#1f7a8c';
 
 /** An invented rock pool: teal water over sand, with a coral band. */
 const rockPool = encodePng(120, 80, (x, y) =>
@@ -171,6 +173,15 @@ describe('a whole month, start to finish', () => {
       await stepForm.getByRole('button', { name: 'Add step' }).click();
       await page.getByRole('list', { name: 'Run sheet' }).getByText('Pour in the stock').waitFor();
     }
+    // The teal of the rock pool as the colorway's target, so the archive can find it by color.
+    const listed = (await (await host.call('GET', api('/colorways'))).json()) as {
+      items: { id: string; name: string }[];
+    };
+    const poolTeal = listed.items.find((c) => c.name === 'Pool Teal')!;
+    const patched = await host.call('PATCH', api(`/colorways/${poolTeal.id}`), {
+      targetSwatches: [{ hex: poolWaterHex, name: 'Pool water' }],
+    });
+    expect(patched.status).toBe(200);
     await saveScreenshot(page, 'month-1-plan');
     await page.context().close();
   }, 180_000);
@@ -277,4 +288,181 @@ describe('a whole month, start to finish', () => {
     await slow.getByText(/ended/i).first().waitFor({ timeout: 20_000 });
     for (const page of [board, slow, flaky]) await page.context().close();
   }, 180_000);
+
+  it('4 · share: the host opens sharing; two phones share their skeins', async () => {
+    const desk = await openAs(
+      host,
+      'desktop',
+      'console',
+      `/studios/${slug}/dye-alongs/${dyeAlongId}`,
+    );
+    await desk.getByRole('button', { name: 'Open skein sharing' }).click();
+    await desk.getByRole('button', { name: 'Open skein sharing' }).waitFor({ state: 'detached' });
+    await desk.context().close();
+
+    for (const [person, yarnHex, consent] of [
+      [pim, poolWaterHex, true],
+      [ada, '#b0487a', false],
+    ] as const) {
+      const phone = await openAs(person, 'phone', 'viewer', `/s/${slug}/dye-alongs/${dyeAlongId}`);
+      await phone.getByRole('link', { name: 'Share your skein' }).click();
+      await phone.getByRole('heading', { name: 'Share your skein', level: 1 }).waitFor();
+      await phone.getByLabel('Choose from photos').setInputFiles({
+        name: 'skein.jpg',
+        mimeType: 'image/jpeg',
+        buffer: await drawSkeinJpeg(phone, yarnHex),
+      });
+      await phone.getByRole('group', { name: /Yarn area on Photo 1/ }).waitFor();
+      await phone.getByLabel('Which colorway inspired it?').selectOption({ label: 'Pool Teal' });
+      await phone.getByLabel('Yarn base').fill('Shoreline Sock');
+      await phone.getByLabel('Main fiber').selectOption('wool');
+      await phone.getByLabel('Dyes used').fill('Brinewell Blue, vinegar');
+      if (consent) await phone.getByRole('switch', { name: /feature it in the recap/ }).check();
+      await phone.getByRole('button', { name: 'Share my skein' }).click();
+      const shared = phone.getByRole('region', { name: 'Shared' });
+      await shared.waitFor({ timeout: 30_000 });
+      if (person === pim) {
+        // The same teal as the target: the closest of the kind bands (reference bands).
+        await shared.getByRole('heading', { name: 'Very close to the inspiration' }).waitFor();
+        await saveScreenshot(phone, 'month-4-share-phone');
+      }
+      await phone.context().close();
+    }
+  }, 180_000);
+
+  it('5 · review: a moderator approves one skein and sends one back, by keyboard', async () => {
+    expect((await moderator.call('PUT', api('/follow'), { mailOptIn: false })).status).toBe(200);
+    const promoted = await host.call('PATCH', api(`/members/${moderator.userId}`), {
+      role: 'moderator',
+    });
+    expect(promoted.status).toBe(200);
+
+    const page = await openAs(moderator, 'desktop', 'console', `/studios/${slug}/review`);
+    const card = (name: string) => page.getByRole('article', { name: `Skein by ${name}` });
+    await card('Ada Kelpie').waitFor();
+    // Oldest first: Pim shared before Ada.
+    await expect
+      .poll(() => card('Pim Shellgrove').evaluate((e) => e === document.activeElement))
+      .toBe(true);
+    await page.keyboard.press('a');
+    await page.getByText('Approved: Pim Shellgrove’s skein.').waitFor();
+    await expect
+      .poll(() => card('Ada Kelpie').evaluate((e) => e === document.activeElement))
+      .toBe(true);
+    await page.keyboard.press('c');
+    await page.getByRole('dialog', { name: /Ask for a change: Ada Kelpie’s skein/ }).waitFor();
+    await page.keyboard.press('1');
+    await page.keyboard.press('Enter');
+    await page.getByText('Asked for a change: Ada Kelpie’s skein.').waitFor();
+    await page.getByText('Nothing waits for review', { exact: false }).waitFor();
+    await saveScreenshot(page, 'month-5-review');
+    await page.context().close();
+
+    await waitForMail(pim.email, new RegExp(`Your skein is in the ${title} gallery`), 30_000);
+    const sentBack = await waitForMail(
+      ada.email,
+      /A small change for the skein you shared/,
+      30_000,
+    );
+    expect(sentBack.text).toContain('We could not see the yarn well.');
+  }, 120_000);
+
+  it('6 · recap: the host features a skein, builds a running order and presents it', async () => {
+    const queue = (await (
+      await host.call('GET', api('/review/submissions?status=approved'))
+    ).json()) as { items: { id: string }[] };
+    expect(queue.items).toHaveLength(1);
+    const featured = await host.call(
+      'POST',
+      api(`/review/submissions/${queue.items[0]!.id}/decisions`),
+      { action: 'feature' },
+    );
+    expect(featured.status).toBe(200);
+
+    const page = await openAs(
+      host,
+      'desktop',
+      'console',
+      `/studios/${slug}/dye-alongs/${dyeAlongId}`,
+    );
+    await page.getByRole('button', { name: 'Move on to the recap' }).click();
+    await page.getByRole('button', { name: 'Move on to the recap' }).waitFor({ state: 'detached' });
+    await page.getByRole('link', { name: 'Recap running order' }).click();
+    await page.getByRole('button', { name: 'Add Pool Teal by Pim Shellgrove' }).click();
+    await page.getByRole('button', { name: 'Add Pool Teal', exact: true }).click();
+    await page.getByRole('button', { name: 'Add Sand Shallows', exact: true }).click();
+    await page.getByLabel(/^Note for item 1/).fill('Pim matched the pool water on the first try.');
+    await page.getByRole('button', { name: 'Save running order' }).click();
+    await page.getByText('Running order saved.').waitFor();
+    await saveScreenshot(page, 'month-6-running-order');
+
+    await page.getByRole('link', { name: 'Present full screen' }).click();
+    await page.getByText('Ready to record offline').waitFor();
+    const shown = page
+      .getByRole('region', { name: 'Shown now' })
+      .getByRole('heading', { level: 1 });
+    const progress = page.getByRole('status').filter({ hasText: /\d+ \/ 3/ });
+    await expect.poll(() => progress.textContent()).toContain('1 / 3');
+    await page.keyboard.press('ArrowRight');
+    await expect.poll(() => progress.textContent()).toContain('2 / 3');
+    await expect.poll(() => shown.textContent()).toContain('Pool Teal');
+    await page.keyboard.press('End');
+    await expect.poll(() => progress.textContent()).toContain('3 / 3');
+    await expect.poll(() => shown.textContent()).toContain('Sand Shallows');
+    await saveScreenshot(page, 'month-6-presenter');
+    await page.context().close();
+  }, 120_000);
+
+  it('7 · archive and dye again: bath record, archived, found by color, a batch sheet', async () => {
+    const page = await openAs(
+      host,
+      'desktop',
+      'console',
+      `/studios/${slug}/dye-alongs/${dyeAlongId}`,
+    );
+    await page.getByRole('link', { name: 'Fill in the bath records' }).click();
+    const form = page.getByRole('form', { name: 'Bath record: Pool Teal' });
+    await form.getByLabel('Dry fiber dyed (g)').fill('100');
+    await form.getByLabel('Bath volume (mL)').fill('3000');
+    await form.getByLabel('Temperature reached (°C)').fill('88');
+    await form.getByLabel('Time at temperature (min)').fill('20');
+    await form.getByLabel('Did the bath exhaust?').selectOption('yes');
+    await form.getByRole('button', { name: 'Save the bath record of Pool Teal' }).click();
+    await form.getByText('Saved the bath record of Pool Teal.').waitFor();
+    await page.getByRole('link', { name: 'Back to the dye-along' }).click();
+    await page.getByRole('button', { name: 'Archive it' }).click();
+    await page.getByRole('button', { name: 'Archive it' }).waitFor({ state: 'detached' });
+
+    await page
+      .getByRole('navigation', { name: 'Workbench' })
+      .getByRole('link', { name: 'Archive' })
+      .click();
+    await page.getByLabel('Color (hex)').fill(poolWaterHex);
+    await page.getByRole('button', { name: 'Search the archive' }).click();
+    const results = page.getByRole('list', { name: 'Archived colorways' });
+    // The target swatch itself: ΔE2000 0 (identical colors, Sharma et al. 2005).
+    await results.getByText('ΔE2000 0 from your color').waitFor();
+    await saveScreenshot(page, 'month-7-archive');
+    await results.getByRole('link', { name: 'Pool Teal' }).click();
+    // 110 mL of a 1 % stock on the 100 g dyed: 1.1 % depth of shade actually went in.
+    const table = page.getByRole('table', { name: 'Planned and actual amount of each dye' });
+    await expect
+      .poll(() => table.getByRole('row', { name: /Brinewell Blue/ }).textContent())
+      .toContain('1.1');
+
+    const dyeAgain = page.getByRole('form', { name: 'Dye again' });
+    await dyeAgain.getByLabel('Skeins').fill('4');
+    await dyeAgain.getByLabel('Pot').selectOption({ label: 'Big enamel pot (12 L)' });
+    await dyeAgain.getByRole('button', { name: 'Open the batch sheet' }).click();
+    const sheet = page.getByRole('article', { name: 'Pool Teal, dyed again' });
+    await sheet.waitFor();
+    await sheet.getByText('Caution · Hot bath', { exact: false }).waitFor();
+    await saveScreenshot(page, 'month-7-batch-sheet');
+    const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true });
+    expect(pdf.subarray(0, 4).toString('latin1')).toBe('%PDF');
+    await page.context().close();
+
+    // Nothing on any screen of the month logged an error or reached beyond loopback.
+    expect(problems.filter((p) => !p.includes('ERR_INTERNET_DISCONNECTED'))).toEqual([]);
+  }, 120_000);
 });

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiPerson } from '../support/api.ts';
 import {
@@ -9,6 +9,7 @@ import {
   saveScreenshot,
   watchPage,
 } from '../support/browser.ts';
+import { drawSkeinJpeg } from '../support/images.ts';
 
 // Step 4 of the month on a phone: a follower shares a photo of their skein (drawn in code),
 // watches it upload, reads how close it came in words, finds it waiting in My skeins, and
@@ -73,22 +74,6 @@ beforeAll(async () => {
 
 afterAll(() => browser?.close());
 
-/** A skein photo drawn on the phone's own canvas: the yarn fills the middle, a pale cloth around. */
-async function drawSkeinJpeg(page: Page): Promise<Buffer> {
-  const dataUrl = await page.evaluate((hex) => {
-    const canvas = document.createElement('canvas');
-    canvas.width = 1200;
-    canvas.height = 900;
-    const ctx = canvas.getContext('2d')!;
-    ctx.fillStyle = '#e8e4dc';
-    ctx.fillRect(0, 0, 1200, 900);
-    ctx.fillStyle = hex;
-    ctx.fillRect(150, 120, 900, 660);
-    return canvas.toDataURL('image/jpeg', 0.92);
-  }, yarnHex);
-  return Buffer.from(dataUrl.split(',')[1]!, 'base64');
-}
-
 describe('sharing a skein from a phone', () => {
   it('shares with progress and kind words, lists it as waiting, withdraws another', async () => {
     const context = await newContext(browser, 'phone');
@@ -111,7 +96,7 @@ describe('sharing a skein from a phone', () => {
     await page.getByLabel('Choose from photos').setInputFiles({
       name: 'skein.jpg',
       mimeType: 'image/jpeg',
-      buffer: await drawSkeinJpeg(page),
+      buffer: await drawSkeinJpeg(page, yarnHex),
     });
     await page.getByRole('group', { name: /Yarn area on Photo 1/ }).waitFor();
     await page.getByLabel('Which colorway inspired it?').selectOption({ label: 'Pool Teal' });
@@ -147,7 +132,7 @@ describe('sharing a skein from a phone', () => {
       },
       {
         path: `/api/studios/${slug}/dye-alongs/${dyeAlongId}/submissions`,
-        photo: (await drawSkeinJpeg(page)).toString('base64'),
+        photo: (await drawSkeinJpeg(page, yarnHex)).toString('base64'),
       },
     );
     expect(second).toBe(201);

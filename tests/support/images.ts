@@ -1,3 +1,4 @@
+import type { Page } from 'playwright-core';
 import { crc32, deflateSync } from 'node:zlib';
 
 /** A minimal 8-bit RGB PNG (W3C PNG specification §5, §9): chunks with CRC, filter 0 rows. */
@@ -24,4 +25,20 @@ export function encodePng(w: number, h: number, pixel: (x: number, y: number) =>
     chunk('IDAT', deflateSync(rows)),
     chunk('IEND', Buffer.alloc(0)),
   ]);
+}
+
+/** A skein photo drawn on the phone's canvas: the yarn fills the middle, a pale cloth around. */
+export async function drawSkeinJpeg(page: Page, hex: string): Promise<Buffer> {
+  const dataUrl = await page.evaluate((yarn) => {
+    const canvas = document.createElement('canvas');
+    canvas.width = 1200;
+    canvas.height = 900;
+    const ctx = canvas.getContext('2d')!;
+    ctx.fillStyle = '#e8e4dc';
+    ctx.fillRect(0, 0, 1200, 900);
+    ctx.fillStyle = yarn;
+    ctx.fillRect(150, 120, 900, 660);
+    return canvas.toDataURL('image/jpeg', 0.92);
+  }, hex);
+  return Buffer.from(dataUrl.split(',')[1]!, 'base64');
 }
