@@ -6,6 +6,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiPerson } from '../support/api.ts';
 import { appOrigin, launchBrowser, newContext, watchPage } from '../support/browser.ts';
+import { encodePng } from '../support/images.ts';
 import { makeLiveMonth } from '../support/live-month.ts';
 
 // axe-core (Deque's rules for WCAG 2.0/2.1/2.2 A and AA) run inside every screen of both apps,
@@ -30,6 +31,7 @@ const slug = `e2e-axe-${randomUUID().slice(0, 8)}`;
 let dyeAlongId = '';
 let colorwayId = '';
 let sessionId = '';
+let skeinId = '';
 
 beforeAll(async () => {
   browser = await launchBrowser();
@@ -56,6 +58,36 @@ beforeAll(async () => {
   );
   expect(live.status).toBe(201);
   ({ sessionId } = (await live.json()) as { sessionId: string });
+
+  // A shared skein, approved and featured, so the gallery, the queue and the recap have one.
+  const opened = await host.call('PATCH', `/api/studios/${slug}/dye-alongs/${dyeAlongId}`, {
+    shareOpensAt: new Date(Date.now() - 60_000).toISOString(),
+  });
+  expect(opened.status).toBe(200);
+  const form = new FormData();
+  form.append(
+    'details',
+    JSON.stringify({ baseName: 'Tidewrack Sock', dyesUsed: ['teal gel'], consentToFeature: true }),
+  );
+  const photo = encodePng(160, 120, (x) => (x < 120 ? [31, 111, 120] : [232, 228, 220]));
+  form.append('photos', new Blob([new Uint8Array(photo)], { type: 'image/png' }), 'skein.png');
+  const shared = await viewer.call(
+    'POST',
+    `/api/studios/${slug}/dye-alongs/${dyeAlongId}/submissions`,
+    form,
+  );
+  expect(shared.status).toBe(201);
+  ({ id: skeinId } = (await shared.json()) as { id: string });
+  const featured = await host.call(
+    'POST',
+    `/api/studios/${slug}/review/submissions/${skeinId}/decisions`,
+    { action: 'feature' },
+  );
+  expect(featured.status).toBe(200);
+  const recap = await host.call('PUT', `/api/studios/${slug}/dye-alongs/${dyeAlongId}/recap`, {
+    items: [{ submissionId: skeinId, note: 'Dyed on a camp stove.' }, { colorwayId }],
+  });
+  expect(recap.status, await recap.clone().text()).toBe(200);
 });
 
 afterAll(() => browser?.close());
@@ -72,6 +104,15 @@ function screens(): Screen[] {
     { name: 'dye-along page', path: month, as: 'viewer', viewport: 'phone' },
     { name: 'live follow-along', path: `/live/${sessionId}`, as: 'viewer', viewport: 'phone' },
     { name: 'profile', path: '/profile', as: 'viewer', viewport: 'phone' },
+    { name: 'share a skein', path: `${month}/share`, as: 'viewer', viewport: 'phone' },
+    { name: 'my skeins', path: `/s/${slug}/my-skeins`, as: 'viewer', viewport: 'phone' },
+    { name: 'gallery', path: `${month}/gallery`, as: 'visitor', viewport: 'phone' },
+    {
+      name: 'a skein in the gallery',
+      path: `${month}/gallery/${skeinId}`,
+      as: 'visitor',
+      viewport: 'phone',
+    },
     { name: 'not found', path: '/no-such-page', as: 'visitor', viewport: 'phone' },
   ];
   const consoleScreens: Screen[] = [
@@ -111,6 +152,38 @@ function screens(): Screen[] {
       viewport: 'desktop',
     },
     { name: 'start a studio', path: '/console/studios/new', as: 'host', viewport: 'desktop' },
+    {
+      name: 'review queue',
+      path: `${studio}/review?status=featured`,
+      as: 'host',
+      viewport: 'desktop',
+    },
+    { name: 'review audit', path: `${studio}/review/audit`, as: 'host', viewport: 'desktop' },
+    {
+      name: 'recap running order',
+      path: `${studio}/dye-alongs/${dyeAlongId}/recap`,
+      as: 'host',
+      viewport: 'desktop',
+    },
+    {
+      name: 'recap presenter',
+      path: `${studio}/dye-alongs/${dyeAlongId}/presenter`,
+      as: 'host',
+      viewport: 'desktop',
+    },
+    {
+      name: 'presenter notes',
+      path: `${studio}/dye-alongs/${dyeAlongId}/presenter/notes`,
+      as: 'host',
+      viewport: 'desktop',
+    },
+    {
+      name: 'bath records',
+      path: `${studio}/dye-alongs/${dyeAlongId}/bath-records`,
+      as: 'host',
+      viewport: 'desktop',
+    },
+    { name: 'archive', path: `${studio}/archive`, as: 'host', viewport: 'desktop' },
   ];
   return [...viewerScreens, ...consoleScreens];
 }

@@ -317,7 +317,13 @@ describe('a whole month, start to finish', () => {
       await phone.getByLabel('Yarn base').fill('Shoreline Sock');
       await phone.getByLabel('Main fiber').selectOption('wool');
       await phone.getByLabel('Dyes used').fill('Brinewell Blue, vinegar');
-      if (consent) await phone.getByRole('switch', { name: /feature it in the recap/ }).check();
+      if (consent) {
+        // The switch is drawn over its label, which takes the tap as a finger would.
+        await phone.getByText('The host may feature it in the recap').click();
+        expect(
+          await phone.getByRole('switch', { name: /feature it in the recap/ }).isChecked(),
+        ).toBe(true);
+      }
       await phone.getByRole('button', { name: 'Share my skein' }).click();
       const shared = phone.getByRole('region', { name: 'Shared' });
       await shared.waitFor({ timeout: 30_000 });
@@ -330,7 +336,7 @@ describe('a whole month, start to finish', () => {
     }
   }, 180_000);
 
-  it('5 · review: a moderator approves one skein and sends one back, by keyboard', async () => {
+  it('5 · review: a moderator approves one skein and sends one back by keyboard, then features it', async () => {
     expect((await moderator.call('PUT', api('/follow'), { mailOptIn: false })).status).toBe(200);
     const promoted = await host.call('PATCH', api(`/members/${moderator.userId}`), {
       role: 'moderator',
@@ -340,7 +346,9 @@ describe('a whole month, start to finish', () => {
     const page = await openAs(moderator, 'desktop', 'console', `/studios/${slug}/review`);
     const card = (name: string) => page.getByRole('article', { name: `Skein by ${name}` });
     await card('Ada Kelpie').waitFor();
-    // Oldest first: Pim shared before Ada.
+    // Oldest first: Pim shared before Ada. Down and back up puts the focus on Pim's.
+    await page.keyboard.press('j');
+    await page.keyboard.press('k');
     await expect
       .poll(() => card('Pim Shellgrove').evaluate((e) => e === document.activeElement))
       .toBe(true);
@@ -356,6 +364,12 @@ describe('a whole month, start to finish', () => {
     await page.getByText('Asked for a change: Ada Kelpie’s skein.').waitFor();
     await page.getByText('Nothing waits for review', { exact: false }).waitFor();
     await saveScreenshot(page, 'month-5-review');
+
+    // Among the approved, Pim's (Pim agreed) is featured for the recap.
+    await page.getByLabel('Status').selectOption('approved');
+    await card('Pim Shellgrove').waitFor();
+    await card('Pim Shellgrove').getByRole('button', { name: 'Feature' }).click();
+    await page.getByText('Featured: Pim Shellgrove’s skein.').waitFor();
     await page.context().close();
 
     await waitForMail(pim.email, new RegExp(`Your skein is in the ${title} gallery`), 30_000);
@@ -367,18 +381,7 @@ describe('a whole month, start to finish', () => {
     expect(sentBack.text).toContain('We could not see the yarn well.');
   }, 120_000);
 
-  it('6 · recap: the host features a skein, builds a running order and presents it', async () => {
-    const queue = (await (
-      await host.call('GET', api('/review/submissions?status=approved'))
-    ).json()) as { items: { id: string }[] };
-    expect(queue.items).toHaveLength(1);
-    const featured = await host.call(
-      'POST',
-      api(`/review/submissions/${queue.items[0]!.id}/decisions`),
-      { action: 'feature' },
-    );
-    expect(featured.status).toBe(200);
-
+  it('6 · recap: the host builds a running order and presents it', async () => {
     const page = await openAs(
       host,
       'desktop',
