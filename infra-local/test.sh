@@ -43,6 +43,9 @@ echo "[vatside] npm test took $(($(date +%s) - started)) s"
 # One plain closing line that any reader of the log understands.
 node -e '
   const r = JSON.parse(require("fs").readFileSync(process.argv[1], "utf8"));
-  console.log(`vitest: ${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests + r.numTodoTests} skipped`);
+  // A file whose set-up failed runs no test: it counts as failed here, not only as skipped.
+  const files = r.testResults.filter((t) => t.status === "failed").length;
+  const broken = files ? `, ${files} files failed` : "";
+  console.log(`vitest: ${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests + r.numTodoTests} skipped${broken}`);
 ' "$VATSIDE_TEST_RESULTS/vitest.json" || status=1
 exit "$status"

@@ -81,7 +81,7 @@ beforeAll(async () => {
   const featured = await host.call(
     'POST',
     `/api/studios/${slug}/review/submissions/${skeinId}/decisions`,
-    { action: 'feature' },
+    { decision: 'feature' },
   );
   expect(featured.status).toBe(200);
   const recap = await host.call('PUT', `/api/studios/${slug}/dye-alongs/${dyeAlongId}/recap`, {

@@ -115,7 +115,7 @@ describe('Recap running order', { timeout: 30_000 }, () => {
     ]);
     await user.click(screen.getByRole('button', { name: 'Add Pool Teal by Ines Shore' }));
     await user.type(screen.getByLabelText(/^Note for item 4/), 'Look at the speckles.');
-    await user.click(screen.getByRole('button', { name: 'Take item 3 out of the recap' }));
+    await user.click(screen.getByRole('button', { name: 'Take out item 3 from the recap' }));
     expect(screen.getByText('Not saved yet')).toBeInTheDocument();
 
     await user.click(save);

@@ -109,7 +109,7 @@ export function RunningOrderItem({
               <Button
                 variant="secondary"
                 onClick={onRemove}
-                aria-label={`Take item ${number} out of the recap`}
+                aria-label={`Take out item ${number} from the recap`}
               >
                 Take out
               </Button>

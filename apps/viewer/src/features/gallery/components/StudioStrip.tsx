@@ -9,7 +9,12 @@ export function StudioStrip({ colorways }: { colorways: GalleryColorway[] }) {
       <h2 id="studio-strip-title" className="font-display text-2xl font-semibold">
         From the studio
       </h2>
-      <ul className="-mx-4 flex snap-x scroll-px-4 gap-3 overflow-x-auto px-4 pb-2">
+      {/* Scrolls sideways: focusable, so arrow keys scroll it too (WCAG 2.1.1). */}
+      <ul
+        tabIndex={0}
+        aria-label="The studio’s colorways, side by side"
+        className="-mx-4 flex snap-x scroll-px-4 gap-3 overflow-x-auto px-4 pb-2 focus-visible:outline-3 focus-visible:outline-vat-700"
+      >
         {colorways.map((colorway) => (
           <li
             key={colorway.id}
