@@ -13,7 +13,8 @@ import {
   user,
 } from '@vatside/db/schema';
 import { decideOne } from '../services/review.ts';
-import { sharingWindow } from '../services/sharing-window.ts';
+import type { ShareLimits } from '../services/share-limits.ts';
+import { sharingWindow } from '@vatside/contracts/sharing-window';
 import { dyeAlongOpenForSharing, shareSkein } from '../services/submissions.ts';
 import { skeinPhotoJpeg, yarnCropFor, type SkeinLook } from './tide-pool-share-photo.ts';
 import type { TidePoolSeedDeps } from './tide-pool.ts';
@@ -209,6 +210,9 @@ function decisionsFor(outcome: Outcome) {
 export const tidePoolShareStatuses: SubmissionStatus[] = tidePoolShares.map((s) => s.outcome.to);
 
 /** Seeds the shares; a viewer who already shared a skein for the month is left as they are. */
+// Each demo sharer shares one skein: the per-person limits never come into it.
+const demoShareLimits: ShareLimits = { sharesPerHour: 1_000, storageQuotaBytes: 2 ** 40 };
+
 export async function seedTidePoolShares(deps: TidePoolSeedDeps): Promise<void> {
   const { db } = deps;
   const now = deps.now ?? new Date();
@@ -236,7 +240,7 @@ export async function seedTidePoolShares(deps: TidePoolSeedDeps): Promise<void> 
 
   // The demo month stays announced, so the live session can still be shown from the start. Its
   // sharing window is opened early instead (the host may open sharing before the live session,
-  // see services/sharing-window.ts), so the shares below pass the real route's own check and a
+  // see @vatside/contracts/sharing-window), so the shares below pass the real route's own check and a
   // demo viewer can share one more from the phone. It closes as planned, two weeks after the
   // start; shareClosesAt is left alone.
   if (!sharingWindow(month, now).open) {
@@ -284,6 +288,7 @@ export async function seedTidePoolShares(deps: TidePoolSeedDeps): Promise<void> 
         crops: [yarnCropFor(plan.look)],
       }),
       maxPixels: deps.maxPixels,
+      limits: demoShareLimits,
     });
     for (const decision of decisionsFor(plan.outcome)) {
       await decideOne(

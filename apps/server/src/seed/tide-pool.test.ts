@@ -17,7 +17,7 @@ import {
 import { seedDemo } from '@vatside/db/seed';
 import { and, eq, inArray } from '@vatside/db/sql';
 import type { RunningServer } from '../server.ts';
-import { sharingWindow } from '../services/sharing-window.ts';
+import { sharingWindow } from '@vatside/contracts/sharing-window';
 import { startTestServer } from '../test-support/test-server.ts';
 import { tidePoolSvg } from './tide-pool-image.ts';
 import { skeinPhotoJpeg } from './tide-pool-share-photo.ts';
