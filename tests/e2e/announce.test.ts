@@ -1,14 +1,15 @@
 import { randomUUID } from 'node:crypto';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ApiPerson, waitForMail } from '../support/api.ts';
+import { ApiPerson, created, waitForMail } from '../support/api.ts';
 import {
   appOrigin,
   launchBrowser,
   newContext,
   saveScreenshot,
+  signInThroughForm,
   watchPage,
 } from '../support/browser.ts';
 
@@ -25,11 +26,6 @@ const title = 'Tide pool month';
 const hostZone = 'America/Halifax';
 const viewerZone = 'Asia/Tokyo';
 const api = (rest: string) => `/api/studios/${slug}${rest}`;
-
-async function created<T>(res: Response): Promise<T> {
-  if (res.status !== 201) throw new Error(`expected 201, got ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
 
 /** A day ten days on, as the host's wall clock reads it, at 2 PM. */
 function startInTenDays(): string {
@@ -128,19 +124,12 @@ afterAll(() => browser?.close());
 let dyeAlongId = '';
 let startsAt = '';
 
-async function signInToConsole(page: Page, next: string) {
-  await page.goto(`${appOrigin}/console/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(host.email);
-  await page.getByLabel('Password').fill(host.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
-
 describe('the host plans and announces a dye-along (desktop)', () => {
   it('creates it with a start on the host’s clock, announces it, and the follower is e-mailed', async () => {
     const context = await newContext(browser, 'desktop', hostZone);
     const page = await context.newPage();
     const problems = watchPage(page);
-    await signInToConsole(page, `/studios/${slug}/dye-alongs/new`);
+    await signInThroughForm(page, host, 'console', `/studios/${slug}/dye-alongs/new`);
 
     await page.getByLabel('Title').fill(title);
     await page.getByLabel('Stream link').fill('https://stream.example.test/wrackline');
@@ -188,7 +177,7 @@ describe('the host plans and announces a dye-along (desktop)', () => {
     const context = await newContext(browser, 'desktop', hostZone);
     const page = await context.newPage();
     const problems = watchPage(page);
-    await signInToConsole(page, `/studios/${slug}/dye-alongs/${dyeAlongId}`);
+    await signInThroughForm(page, host, 'console', `/studios/${slug}/dye-alongs/${dyeAlongId}`);
     await page.getByRole('link', { name: 'Recipe card: Pool Teal' }).click();
 
     const card = page.getByRole('article', { name: 'Pool Teal' });

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiPerson } from '../support/api.ts';
 import {
@@ -9,6 +9,7 @@ import {
   launchBrowser,
   newContext,
   saveScreenshot,
+  signInThroughForm,
   watchPage,
 } from '../support/browser.ts';
 import { makeLiveMonth, type LiveMonth } from '../support/live-month.ts';
@@ -58,13 +59,6 @@ beforeAll(async () => {
 
 afterAll(() => browser?.close());
 
-async function signIn(page: Page, next: string) {
-  await page.goto(`${appOrigin}/console/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(host.email);
-  await page.getByLabel('Password').fill(host.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
-
 describe('archive and dye again (desktop)', () => {
   it('logs the pot, records the bath, archives, finds by color and prints a batch sheet', async () => {
     const context = await newContext(browser, 'desktop');
@@ -72,7 +66,7 @@ describe('archive and dye again (desktop)', () => {
     const problems = watchPage(page);
 
     // Live: the host logs 90 mL of teal stock instead of the planned 100 mL.
-    await signIn(page, `/studios/${slug}/live`);
+    await signInThroughForm(page, host, 'console', `/studios/${slug}/live`);
     await page
       .getByRole('article', { name: month.title })
       .getByRole('button', { name: 'Go live' })

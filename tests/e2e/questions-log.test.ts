@@ -1,12 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiPerson } from '../support/api.ts';
 import {
-  appOrigin,
   launchBrowser,
   newContext,
   saveScreenshot,
+  signInThroughForm,
   watchPage,
 } from '../support/browser.ts';
 import { makeLiveMonth } from '../support/live-month.ts';
@@ -45,18 +45,11 @@ beforeAll(async () => {
 
 afterAll(() => browser?.close());
 
-async function signIn(page: Page, origin: string, person: ApiPerson, next: string) {
-  await page.goto(`${origin}/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(person.email);
-  await page.getByLabel('Password').fill(person.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
-
 async function phoneFor(person: ApiPerson, sessionId: string) {
   const context = await newContext(browser, 'phone');
   const page = await context.newPage();
   const problems = watchPage(page);
-  await signIn(page, appOrigin, person, `/live/${sessionId}`);
+  await signInThroughForm(page, person, 'viewer', `/live/${sessionId}`);
   const questions = page.getByRole('region', { name: 'Questions' });
   await questions.getByLabel('Your question to the host').waitFor();
   return { context, page, problems, questions };
@@ -69,7 +62,7 @@ describe('the dye log and the question queue during a live session', () => {
     contexts.push(hostContext);
     const board = await hostContext.newPage();
     const hostProblems = watchPage(board);
-    await signIn(board, `${appOrigin}/console`, host, `/studios/${slug}/live`);
+    await signInThroughForm(board, host, 'console', `/studios/${slug}/live`);
     await board
       .getByRole('article', { name: 'Tide pool month' })
       .getByRole('button', { name: 'Go live' })
@@ -113,10 +106,10 @@ describe('the dye log and the question queue during a live session', () => {
     contexts.push(modContext);
     const desk = await modContext.newPage();
     const modProblems = watchPage(desk);
-    await signIn(
+    await signInThroughForm(
       desk,
-      `${appOrigin}/console`,
       moderator,
+      'console',
       `/studios/${slug}/live/${sessionId}/questions`,
     );
     const row = desk.getByRole('listitem', { name: 'Question from Pim Driftwood' });

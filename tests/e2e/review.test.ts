@@ -3,10 +3,10 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiPerson, waitForMail } from '../support/api.ts';
 import {
-  appOrigin,
   launchBrowser,
   newContext,
   saveScreenshot,
+  signInThroughForm,
   watchPage,
 } from '../support/browser.ts';
 import { makeLiveMonth, type LiveMonth } from '../support/live-month.ts';
@@ -88,13 +88,6 @@ beforeAll(async () => {
 
 afterAll(() => browser?.close());
 
-async function signIn(page: Page, person: ApiPerson, next: string) {
-  await page.goto(`${appOrigin}/console/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(person.email);
-  await page.getByLabel('Password').fill(person.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
-
 const card = (page: Page, name: string) => page.getByRole('article', { name: `Skein by ${name}` });
 
 describe('the review queue, worked by keyboard', () => {
@@ -102,7 +95,7 @@ describe('the review queue, worked by keyboard', () => {
     // A look at the queue on a tablet first.
     const tablet = await browser.newContext({ viewport: { width: 820, height: 1180 } });
     const tabletPage = await tablet.newPage();
-    await signIn(tabletPage, moderator, `/studios/${slug}/review`);
+    await signInThroughForm(tabletPage, moderator, 'console', `/studios/${slug}/review`);
     await card(tabletPage, 'Cato Wendle').waitFor();
     await saveScreenshot(tabletPage, 'review-queue-tablet');
     await tablet.close();
@@ -110,7 +103,7 @@ describe('the review queue, worked by keyboard', () => {
     const context = await newContext(browser, 'desktop');
     const page = await context.newPage();
     const problems = watchPage(page);
-    await signIn(page, moderator, `/studios/${slug}/review`);
+    await signInThroughForm(page, moderator, 'console', `/studios/${slug}/review`);
     await card(page, 'Cato Wendle').waitFor();
     await expect
       .poll(() => page.getByRole('link', { name: /^Review/ }).textContent())

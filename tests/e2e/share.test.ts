@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ApiPerson } from '../support/api.ts';
+import { ApiPerson, created } from '../support/api.ts';
 import {
   appOrigin,
   launchBrowser,
@@ -21,11 +21,6 @@ let viewer: ApiPerson;
 let dyeAlongId = '';
 const slug = `e2e-share-${randomUUID().slice(0, 8)}`;
 const yarnHex = '#2d6f86';
-
-async function created<T>(res: Response): Promise<T> {
-  if (res.status !== 201) throw new Error(`expected 201, got ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
 
 beforeAll(async () => {
   browser = await launchBrowser();

@@ -1,12 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiPerson } from '../support/api.ts';
 import {
-  appOrigin,
   launchBrowser,
   newContext,
   saveScreenshot,
+  signInThroughForm,
   watchPage,
 } from '../support/browser.ts';
 import { encodePng } from '../support/images.ts';
@@ -24,13 +24,6 @@ const studio = `/studios/${slug}`;
 const rockPool = encodePng(120, 80, (x, y) =>
   y < 40 ? [31, 122, 140] : x < 80 ? [217, 201, 163] : [224, 106, 78],
 );
-
-async function signIn(page: Page, next: string) {
-  await page.goto(`${appOrigin}/console/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(host.email);
-  await page.getByLabel('Password').fill(host.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
 
 beforeAll(async () => {
   browser = await launchBrowser();
@@ -50,7 +43,7 @@ describe('the host plans a colorway on the workbench (desktop)', () => {
     const context = await newContext(browser, 'desktop');
     const page = await context.newPage();
     const problems = watchPage(page);
-    await signIn(page, `${studio}/bases`);
+    await signInThroughForm(page, host, 'console', `${studio}/bases`);
 
     // A base.
     const baseForm = page.getByRole('form', { name: 'Add a base' });
@@ -206,7 +199,7 @@ describe('the workbench on a phone', () => {
     const context = await newContext(browser, 'phone');
     const page = await context.newPage();
     const problems = watchPage(page);
-    await signIn(page, `${studio}/colorways`);
+    await signInThroughForm(page, host, 'console', `${studio}/colorways`);
     await page.getByRole('link', { name: 'Low tide' }).click();
     await page
       .getByRole('region', { name: 'Amounts' })

@@ -83,3 +83,9 @@ export class ApiPerson {
     return res;
   }
 }
+
+/** The body of a 201 answer; anything else fails with the server's words. */
+export async function created<T>(res: Response): Promise<T> {
+  if (res.status !== 201) throw new Error(`expected 201, got ${res.status}: ${await res.text()}`);
+  return (await res.json()) as T;
+}

@@ -59,3 +59,17 @@ export async function saveScreenshot(page: Page, name: string): Promise<void> {
   mkdirSync(resultsDir, { recursive: true });
   await page.screenshot({ path: path.join(resultsDir, `${name}.png`), fullPage: true });
 }
+
+/** Signs in through the app's own form, which then lands on `next` (a path inside that app). */
+export async function signInThroughForm(
+  page: Page,
+  person: { email: string; password: string },
+  app: 'console' | 'viewer',
+  next: string,
+): Promise<void> {
+  const root = app === 'console' ? `${appOrigin}/console` : appOrigin;
+  await page.goto(`${root}/sign-in?next=${encodeURIComponent(next)}`);
+  await page.getByLabel('E-mail').fill(person.email);
+  await page.getByLabel('Password').fill(person.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}

@@ -1,12 +1,8 @@
 import type { ApiPerson } from './api.ts';
+import { created } from './api.ts';
 
 // An announced month with two colorways and their run sheets, set up through the real API by
 // the studio's host (the bodies follow apps/server/src/test-support/dye-along-fixtures.ts).
-
-async function created<T>(res: Response): Promise<T> {
-  if (res.status !== 201) throw new Error(`expected 201, got ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
 
 export interface LiveMonth {
   dyeAlongId: string;

@@ -1,20 +1,15 @@
 import { useQuery } from '@tanstack/react-query';
 import type { MeasureSystem } from '@vatside/dye-kit';
 import { RequireSignIn } from '@vatside/ui/account/RequireSignIn';
-import { Button } from '@vatside/ui/Button';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
-import { SelectField } from '@vatside/ui/form/SelectField';
-import { textLinkClass } from '@vatside/ui/link-class.ts';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { useMe } from '@vatside/ui/session.ts';
 import { useState } from 'react';
-import { Link, useParams, useSearchParams } from 'react-router-dom';
-import { SystemSwitch } from '../../components/SystemSwitch.tsx';
+import { useParams, useSearchParams } from 'react-router-dom';
+import { PrintToolbar, paperFor, type Paper } from '../../components/PrintToolbar.tsx';
 import { dyeAgainQueryOptions } from '../../features/archive/api.ts';
-import { BatchSheet, type Paper } from '../../features/archive/components/BatchSheet.tsx';
+import { BatchSheet } from '../../features/archive/components/BatchSheet.tsx';
 import { studioQueryOptions } from '../../features/studios/api.ts';
-
-const paperNames: Record<Paper, string> = { a4: 'A4', letter: 'US Letter' };
 
 /**
  * The printable batch sheet for dyeing an archived colorway again. Like the recipe card it sits
@@ -40,7 +35,7 @@ function BatchSheetScreen({ initialSystem }: { initialSystem: MeasureSystem }) {
   const { slug = '', archivedColorwayId = '' } = useParams();
   const [params] = useSearchParams();
   const [system, setSystem] = useState(initialSystem);
-  const [paper, setPaper] = useState<Paper>(initialSystem === 'us' ? 'letter' : 'a4');
+  const [paper, setPaper] = useState<Paper>(paperFor(initialSystem));
   const studio = useQuery(studioQueryOptions(slug));
   const potId = params.get('potId');
   const sheet = useQuery(
@@ -54,32 +49,15 @@ function BatchSheetScreen({ initialSystem }: { initialSystem: MeasureSystem }) {
   const failure = studio.error ?? sheet.error;
   return (
     <div className="space-y-6 px-4 py-6">
-      <div className="vs-print-hide mx-auto flex max-w-4xl flex-wrap items-end gap-4 rounded-card bg-vat-900 p-4 text-wool-50 [--vs-focus:var(--color-marigold-300)]">
-        <Link
-          to={`/studios/${slug}/archive/${archivedColorwayId}`}
-          className={`${textLinkClass} gap-1 text-wool-50 hover:text-marigold-300`}
-        >
-          <span aria-hidden="true">←</span>Back to the archived colorway
-        </Link>
-        <SelectField
-          label="Paper"
-          className="w-44"
-          value={paper}
-          onChange={(event) => setPaper(event.target.value as Paper)}
-        >
-          {Object.entries(paperNames).map(([value, label]) => (
-            <option key={value} value={value}>
-              {label}
-            </option>
-          ))}
-        </SelectField>
-        <div className="rounded-xl bg-wool-50 text-vat-950">
-          <SystemSwitch system={system} onChange={setSystem} />
-        </div>
-        <Button variant="secondary" className="ml-auto" onClick={() => window.print()}>
-          Print this sheet
-        </Button>
-      </div>
+      <PrintToolbar
+        backTo={`/studios/${slug}/archive/${archivedColorwayId}`}
+        backLabel="Back to the archived colorway"
+        paper={paper}
+        onPaper={setPaper}
+        system={system}
+        onSystem={setSystem}
+        printLabel="Print this sheet"
+      />
       {failure ? (
         <ErrorPanel
           title="The batch sheet could not be worked out"

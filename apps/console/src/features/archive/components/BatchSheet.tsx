@@ -1,7 +1,6 @@
 import type { DyeAgain } from '@vatside/contracts/archive';
 import type { Batch, MeasureSystem } from '@vatside/dye-kit';
 import { celsiusToFahrenheit } from '@vatside/dye-kit';
-import { cx } from '@vatside/ui/cx.ts';
 import { StepCaution } from '@vatside/ui/StepCaution';
 import {
   acidName,
@@ -14,9 +13,7 @@ import {
 } from '@vatside/ui/supplies/format.ts';
 import { Swatch } from '@vatside/ui/Swatch';
 import { WarningList } from '@vatside/ui/WarningList';
-import './batch-sheet.css';
-
-export type Paper = 'a4' | 'letter';
+import { printSheetClass, type Paper } from '../../../components/PrintToolbar.tsx';
 
 const cell = 'border border-wool-300 px-3 py-2 text-left align-top';
 
@@ -107,13 +104,7 @@ export function BatchSheet({
   const toMix = sheet.shelf.filter((s) => s.status !== 'enough');
   const bath = sheet.bathRecord;
   return (
-    <article
-      aria-labelledby="sheet-title"
-      className={cx(
-        'vs-batch-sheet mx-auto space-y-6 rounded-card border border-wool-200 bg-white p-8 shadow-card',
-        paper === 'a4' ? 'vs-paper-a4' : 'vs-paper-letter',
-      )}
-    >
+    <article aria-labelledby="sheet-title" className={printSheetClass(paper)}>
       <header className="space-y-1 border-b-2 border-vat-800 pb-3">
         <p className="text-sm font-bold tracking-wide uppercase">Batch sheet · {studioName}</p>
         <h1 id="sheet-title" className="font-display text-4xl font-semibold">

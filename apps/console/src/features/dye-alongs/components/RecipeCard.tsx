@@ -14,9 +14,7 @@ import {
 } from '@vatside/ui/supplies/format.ts';
 import { Swatch } from '@vatside/ui/Swatch';
 import type { ScaledBath } from '../hooks/use-recipe-card.ts';
-import './recipe-card.css';
-
-export type Paper = 'a4' | 'letter';
+import { printSheetClass, type Paper } from '../../../components/PrintToolbar.tsx';
 
 type Row = { what: string; measure: (bath: ColorwayBath) => MeasureText | null };
 
@@ -79,13 +77,7 @@ export function RecipeCard({
   const yarn = supplies.yarn.find((y) => y.colorways.includes(hostBath.name));
   const warnings = supplies.warnings.filter((w) => w.colorway === hostBath.name);
   return (
-    <article
-      aria-labelledby="card-title"
-      className={cx(
-        'vs-recipe-card mx-auto space-y-6 rounded-card border border-wool-200 bg-white p-8 shadow-card',
-        paper === 'a4' ? 'vs-paper-a4' : 'vs-paper-letter',
-      )}
-    >
+    <article aria-labelledby="card-title" className={printSheetClass(paper)}>
       <header className="space-y-1 border-b-2 border-vat-800 pb-3">
         <p className="text-sm font-bold tracking-wide uppercase">Recipe card · {studioName}</p>
         <h1 id="card-title" className="font-display text-4xl font-semibold">

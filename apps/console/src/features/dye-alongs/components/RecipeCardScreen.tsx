@@ -1,19 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import type { Step } from '@vatside/contracts/workbench-colorways';
 import type { MeasureSystem } from '@vatside/dye-kit';
-import { Button } from '@vatside/ui/Button';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
-import { SelectField } from '@vatside/ui/form/SelectField';
-import { textLinkClass } from '@vatside/ui/link-class.ts';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
-import { SystemSwitch } from '../../../components/SystemSwitch.tsx';
+import { PrintToolbar, paperFor, type Paper } from '../../../components/PrintToolbar.tsx';
 import { dyeAlongQueryOptions } from '../api.ts';
 import { useRecipeCard } from '../hooks/use-recipe-card.ts';
-import { RecipeCard, type Paper } from './RecipeCard.tsx';
-
-const paperNames: Record<Paper, string> = { a4: 'A4', letter: 'US Letter' };
+import { RecipeCard } from './RecipeCard.tsx';
 
 /** The printable card with its screen-only toolbar: back, paper size, measures, print. */
 export function RecipeCardScreen({
@@ -34,36 +28,22 @@ export function RecipeCardScreen({
   backTo: string;
 }) {
   const [system, setSystem] = useState(initialSystem);
-  const [paper, setPaper] = useState<Paper>(initialSystem === 'us' ? 'letter' : 'a4');
+  const [paper, setPaper] = useState<Paper>(paperFor(initialSystem));
   const dyeAlong = useQuery(dyeAlongQueryOptions(slug, dyeAlongId));
   const card = useRecipeCard(slug, dyeAlongId, colorwayId, system);
   const failure = dyeAlong.error ?? card.error;
 
   return (
     <div className="space-y-6 px-4 py-6">
-      <div className="vs-print-hide mx-auto flex max-w-4xl flex-wrap items-end gap-4 rounded-card bg-vat-900 p-4 text-wool-50 [--vs-focus:var(--color-marigold-300)]">
-        <Link to={backTo} className={`${textLinkClass} gap-1 text-wool-50 hover:text-marigold-300`}>
-          <span aria-hidden="true">←</span>Back to the dye-along
-        </Link>
-        <SelectField
-          label="Paper"
-          className="w-44"
-          value={paper}
-          onChange={(event) => setPaper(event.target.value as Paper)}
-        >
-          {Object.entries(paperNames).map(([value, label]) => (
-            <option key={value} value={value}>
-              {label}
-            </option>
-          ))}
-        </SelectField>
-        <div className="rounded-xl bg-wool-50 text-vat-950">
-          <SystemSwitch system={system} onChange={setSystem} />
-        </div>
-        <Button variant="secondary" className="ml-auto" onClick={() => window.print()}>
-          Print this card
-        </Button>
-      </div>
+      <PrintToolbar
+        backTo={backTo}
+        backLabel="Back to the dye-along"
+        paper={paper}
+        onPaper={setPaper}
+        system={system}
+        onSystem={setSystem}
+        printLabel="Print this card"
+      />
       {failure ? (
         <ErrorPanel
           title="The recipe card could not be put together"

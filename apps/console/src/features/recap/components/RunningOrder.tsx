@@ -1,22 +1,9 @@
-import {
-  closestCenter,
-  DndContext,
-  KeyboardSensor,
-  PointerSensor,
-  useSensor,
-  useSensors,
-  type DragEndEvent,
-} from '@dnd-kit/core';
-import {
-  arrayMove,
-  SortableContext,
-  sortableKeyboardCoordinates,
-  verticalListSortingStrategy,
-} from '@dnd-kit/sortable';
+import { arrayMove } from '@dnd-kit/sortable';
 import type { Recap } from '@vatside/contracts/gallery';
 import { Button } from '@vatside/ui/Button';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { useState } from 'react';
+import { SortableList } from '../../../components/SortableList.tsx';
 import { useSaveRecap } from '../api.ts';
 import { colorwaySlide, skeinSlide, slideOf, updateOf, type Slide } from '../slides.ts';
 import { Candidates } from './Candidates.tsx';
@@ -44,10 +31,6 @@ export function RunningOrder({
   const [slides, setSlides] = useState(saved);
   const save = useSaveRecap(slug, dyeAlongId);
   const [message, setMessage] = useState('');
-  const sensors = useSensors(
-    useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
-    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
-  );
   const keys = slides.map((s) => s.key);
   const inOrder = new Set(keys);
   // What may go in: the server's candidates plus anything taken out here and not yet saved.
@@ -68,9 +51,6 @@ export function RunningOrder({
   const move = (from: number, to: number) => {
     if (to < 0 || to >= slides.length || from === to) return;
     change(arrayMove(slides, from, to));
-  };
-  const onDragEnd = ({ active, over }: DragEndEvent) => {
-    if (over) move(keys.indexOf(String(active.id)), keys.indexOf(String(over.id)));
   };
   const onSave = async () => {
     const answer = await save.mutateAsync(updateOf(slides));
@@ -106,36 +86,20 @@ export function RunningOrder({
               : 'The host has not put anything in the recap yet.'}
           </p>
         ) : (
-          <DndContext
-            sensors={sensors}
-            collisionDetection={closestCenter}
-            onDragEnd={onDragEnd}
-            accessibility={{
-              screenReaderInstructions: {
-                draggable:
-                  'To move an item, press space, use the up and down arrows, then press space again.',
-              },
-            }}
-          >
-            <SortableContext items={keys} strategy={verticalListSortingStrategy}>
-              <ol aria-label="Recap running order" className="space-y-3">
-                {slides.map((slide, index) => (
-                  <RunningOrderItem
-                    key={slide.key}
-                    slide={slide}
-                    number={index + 1}
-                    isLast={index === slides.length - 1}
-                    canEdit={canEdit}
-                    onMove={(by) => move(index, index + by)}
-                    onNote={(note) =>
-                      change(slides.map((s, i) => (i === index ? { ...s, note } : s)))
-                    }
-                    onRemove={() => change(slides.filter((_, i) => i !== index))}
-                  />
-                ))}
-              </ol>
-            </SortableContext>
-          </DndContext>
+          <SortableList ids={keys} label="Recap running order" itemWord="item" onMove={move}>
+            {slides.map((slide, index) => (
+              <RunningOrderItem
+                key={slide.key}
+                slide={slide}
+                number={index + 1}
+                isLast={index === slides.length - 1}
+                canEdit={canEdit}
+                onMove={(by) => move(index, index + by)}
+                onNote={(note) => change(slides.map((s, i) => (i === index ? { ...s, note } : s)))}
+                onRemove={() => change(slides.filter((_, i) => i !== index))}
+              />
+            ))}
+          </SortableList>
         )}
       </section>
       {canEdit ? (

@@ -1,7 +1,6 @@
-import { useSortable } from '@dnd-kit/sortable';
-import { CSS } from '@dnd-kit/utilities';
 import { Button } from '@vatside/ui/Button';
 import { useId } from 'react';
+import { MoveButtons, SortableItem } from '../../../components/SortableList.tsx';
 import { slideTitle, type Slide } from '../slides.ts';
 
 /** One entry: drag handle, thumbnail, what it is, the note to say on camera, move buttons. */
@@ -23,36 +22,16 @@ export function RunningOrderItem({
   onRemove: () => void;
 }) {
   const noteId = useId();
-  const {
-    attributes,
-    listeners,
-    setNodeRef,
-    setActivatorNodeRef,
-    transform,
-    transition,
-    isDragging,
-  } = useSortable({ id: slide.key, disabled: !canEdit });
   const title = slideTitle(slide);
   const photo = slide.kind === 'skein' ? slide.skein.photos[0] : slide.colorway.photo;
   return (
-    <li
-      ref={setNodeRef}
-      aria-label={`${number}. ${title}`}
-      style={{ transform: CSS.Transform.toString(transform), transition }}
-      className={`flex gap-3 rounded-card border-2 bg-white p-3 ${isDragging ? 'relative z-10 border-vat-600 shadow-card' : 'border-wool-300'}`}
+    <SortableItem
+      id={slide.key}
+      itemWord="item"
+      number={number}
+      canEdit={canEdit}
+      label={`${number}. ${title}`}
     >
-      {canEdit ? (
-        <button
-          ref={setActivatorNodeRef}
-          type="button"
-          aria-label={`Drag item ${number}`}
-          className="flex min-h-12 w-12 shrink-0 cursor-grab touch-none items-center justify-center rounded-lg border-2 border-wool-300 text-2xl text-vat-800 active:cursor-grabbing"
-          {...attributes}
-          {...listeners}
-        >
-          <span aria-hidden="true">⠿</span>
-        </button>
-      ) : null}
       {photo ? (
         <img
           src={photo.thumbUrl}
@@ -90,22 +69,7 @@ export function RunningOrderItem({
               className="w-full rounded-lg border-2 border-wool-300 p-2"
             />
             <div className="flex flex-wrap gap-2">
-              <Button
-                variant="secondary"
-                disabled={number === 1}
-                onClick={() => onMove(-1)}
-                aria-label={`Move item ${number} up`}
-              >
-                ↑ Up
-              </Button>
-              <Button
-                variant="secondary"
-                disabled={isLast}
-                onClick={() => onMove(1)}
-                aria-label={`Move item ${number} down`}
-              >
-                ↓ Down
-              </Button>
+              <MoveButtons itemWord="item" number={number} isLast={isLast} onMove={onMove} />
               <Button
                 variant="secondary"
                 onClick={onRemove}
@@ -121,6 +85,6 @@ export function RunningOrderItem({
           </p>
         ) : null}
       </div>
-    </li>
+    </SortableItem>
   );
 }

@@ -1,20 +1,7 @@
-import {
-  closestCenter,
-  DndContext,
-  KeyboardSensor,
-  PointerSensor,
-  useSensor,
-  useSensors,
-  type DragEndEvent,
-} from '@dnd-kit/core';
-import {
-  arrayMove,
-  SortableContext,
-  sortableKeyboardCoordinates,
-  verticalListSortingStrategy,
-} from '@dnd-kit/sortable';
+import { arrayMove } from '@dnd-kit/sortable';
 import type { Step } from '@vatside/contracts/workbench-colorways';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
+import { SortableList } from '../../../components/SortableList.tsx';
 import { useDeleteStep, useReorderSteps } from '../api.ts';
 import { StepItem } from './StepItem.tsx';
 
@@ -37,18 +24,11 @@ export function RunSheet({
 }) {
   const reorder = useReorderSteps(slug, colorwayId);
   const remove = useDeleteStep(slug, colorwayId);
-  const sensors = useSensors(
-    useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
-    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
-  );
   const ids = steps.map((s) => s.id);
 
   const move = (from: number, to: number) => {
     if (to < 0 || to >= ids.length || from === to) return;
     reorder.mutate(arrayMove(ids, from, to));
-  };
-  const onDragEnd = ({ active, over }: DragEndEvent) => {
-    if (over) move(ids.indexOf(String(active.id)), ids.indexOf(String(over.id)));
   };
 
   if (steps.length === 0) {
@@ -64,34 +44,20 @@ export function RunSheet({
         <FormAlert>The new order was not saved: {reorder.error.message}</FormAlert>
       ) : null}
       {remove.error ? <FormAlert>{remove.error.message}</FormAlert> : null}
-      <DndContext
-        sensors={sensors}
-        collisionDetection={closestCenter}
-        onDragEnd={onDragEnd}
-        accessibility={{
-          screenReaderInstructions: {
-            draggable:
-              'To move a step, press space, use the up and down arrows, then press space again.',
-          },
-        }}
-      >
-        <SortableContext items={ids} strategy={verticalListSortingStrategy}>
-          <ol aria-label="Run sheet" className="space-y-3">
-            {steps.map((step, index) => (
-              <StepItem
-                key={step.id}
-                step={step}
-                number={index + 1}
-                isLast={index === steps.length - 1}
-                line={lines.find((l) => l.id === step.recipeLineId)}
-                canEdit={canEdit}
-                onMove={(by) => move(index, index + by)}
-                onDelete={() => remove.mutate(step.id)}
-              />
-            ))}
-          </ol>
-        </SortableContext>
-      </DndContext>
+      <SortableList ids={ids} label="Run sheet" itemWord="step" onMove={move}>
+        {steps.map((step, index) => (
+          <StepItem
+            key={step.id}
+            step={step}
+            number={index + 1}
+            isLast={index === steps.length - 1}
+            line={lines.find((l) => l.id === step.recipeLineId)}
+            canEdit={canEdit}
+            onMove={(by) => move(index, index + by)}
+            onDelete={() => remove.mutate(step.id)}
+          />
+        ))}
+      </SortableList>
     </div>
   );
 }
