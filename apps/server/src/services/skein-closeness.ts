@@ -3,16 +3,24 @@ import sharp from 'sharp';
 import { extractPalette, hexToLab, paletteCloseness, type Lab } from '@vatside/dye-kit';
 import type { YarnCrop } from '@vatside/contracts/submissions';
 import type { StoredSwatch } from '@vatside/db/schema';
+import { sampleAreaOf } from '../uploads/process-image.ts';
 
 // "Close to the inspiration": the main colors of the yarn areas the sharer marked, compared with
 // the month's inspiration palette by dye-kit (share-weighted ΔE2000, CIEDE2000 per Sharma, Wu &
 // Dalal 2005), told in the kind bands of the references. The number itself is never shown.
 
-/** Each yarn area is sampled from a copy this small: enough pixels for k-means, quick to read. */
-const AREA_MAX_PX = 128;
 const YARN_SWATCHES = 4;
 /** Pixels clustered: plenty for four swatches of a yarn area, quick on a busy server. */
 const YARN_SAMPLE = 8_000;
+
+/** The palette of all marked yarn areas together, from their RGBA samples. */
+export function yarnSamplesPalette(samples: Uint8Array[]): StoredSwatch[] {
+  const swatches = extractPalette(new Uint8Array(Buffer.concat(samples)), {
+    count: YARN_SWATCHES,
+    sampleSize: YARN_SAMPLE,
+  });
+  return swatches.map((s) => ({ id: randomUUID(), ...s, label: '' }));
+}
 
 export interface MarkedPhoto {
   /** The pipeline's upright web rendition. */
@@ -22,40 +30,12 @@ export interface MarkedPhoto {
   crop: YarnCrop;
 }
 
-/** The crop in whole pixels, at least one pixel, inside the picture. */
-function cropPixels({ width, height, crop }: MarkedPhoto) {
-  const left = Math.min(width - 1, Math.floor(crop.x * width));
-  const top = Math.min(height - 1, Math.floor(crop.y * height));
-  return {
-    left,
-    top,
-    width: Math.max(1, Math.min(width - left, Math.round(crop.width * width))),
-    height: Math.max(1, Math.min(height - top, Math.round(crop.height * height))),
-  };
-}
-
-/** The palette of all marked yarn areas together (RGBA bytes of each area, concatenated). */
+/** The palette of the marked yarn areas of stored web renditions (a skein's areas re-marked). */
 export async function yarnAreaPalette(photos: MarkedPhoto[]): Promise<StoredSwatch[]> {
-  const areas = await Promise.all(
-    photos.map((p) =>
-      sharp(p.web)
-        .extract(cropPixels(p))
-        .resize({
-          width: AREA_MAX_PX,
-          height: AREA_MAX_PX,
-          fit: 'inside',
-          withoutEnlargement: true,
-        })
-        .ensureAlpha()
-        .raw()
-        .toBuffer(),
-    ),
+  const samples = await Promise.all(
+    photos.map((p) => sampleAreaOf(sharp(p.web), p.width, p.height, p.crop)),
   );
-  const swatches = extractPalette(new Uint8Array(Buffer.concat(areas)), {
-    count: YARN_SWATCHES,
-    sampleSize: YARN_SAMPLE,
-  });
-  return swatches.map((s) => ({ id: randomUUID(), ...s, label: '' }));
+  return yarnSamplesPalette(samples);
 }
 
 export interface InspirationSwatch {

@@ -26,7 +26,12 @@ import { dyeAlongRow, type DyeAlongRow } from './dye-alongs.ts';
 import { recordDecision } from './review-record.ts';
 import { checkShareLimits, lockSharer, type ShareLimits } from './share-limits.ts';
 import { sharingWindow } from '@vatside/contracts/sharing-window';
-import { inspirationPalette, skeinCloseness, yarnAreaPalette } from './skein-closeness.ts';
+import {
+  inspirationPalette,
+  skeinCloseness,
+  yarnAreaPalette,
+  yarnSamplesPalette,
+} from './skein-closeness.ts';
 import { loadSubmissions, toSubmission } from './submission-view.ts';
 import { pageInfo, unknownReference } from './workbench-common.ts';
 
@@ -89,12 +94,19 @@ async function monthPalette(db: Database, dyeAlong: DyeAlongRow) {
   );
 }
 
-/** Runs each photo through the pipeline in turn; a refusal names the photo and stores nothing. */
-async function processPhotos(files: Uint8Array[], maxPixels: number): Promise<ProcessedImage[]> {
+/**
+ * Runs each photo through the pipeline in turn, its marked yarn area read in the same pass; a
+ * refusal names the photo and stores nothing.
+ */
+async function processPhotos(
+  files: Uint8Array[],
+  crops: YarnCrop[],
+  maxPixels: number,
+): Promise<ProcessedImage[]> {
   const out: ProcessedImage[] = [];
   for (const [i, file] of files.entries()) {
     try {
-      out.push(await processImage(file, { maxPixels, swatchCount: 0 }));
+      out.push(await processImage(file, { maxPixels, swatchCount: 0, sampleArea: crops[i] }));
     } catch (error) {
       if (!(error instanceof HttpError)) throw error;
       throw new HttpError(error.status, error.code, `Photo ${i + 1}: ${error.message}`, {
@@ -151,10 +163,8 @@ export async function shareSkein(
     });
   }
   await checkMonthColorway(db, dyeAlong.id, input.colorwayId);
-  const processed = await processPhotos(files, share.maxPixels);
-  const yarnPalette = await yarnAreaPalette(
-    processed.map((p, i) => ({ ...p.web, web: p.web.data, crop: crops[i]! })),
-  );
+  const processed = await processPhotos(files, crops, share.maxPixels);
+  const yarnPalette = yarnSamplesPalette(processed.map((p) => p.areaSample));
   const closeness = skeinCloseness(yarnPalette, await monthPalette(db, dyeAlong));
   // Their stored size is known now: refused here, nothing reaches the store.
   const storedBytes = processed.reduce((total, p) => total + p.web.data.length, 0);

@@ -1,13 +1,14 @@
 import { randomUUID } from 'node:crypto';
 import { availableParallelism } from 'node:os';
-import sharp, { type Sharp } from 'sharp';
+import sharp, { type Metadata, type Sharp } from 'sharp';
 import { describeColor, extractPalette, hexToLab } from '@vatside/dye-kit';
 import type { StoredSwatch } from '@vatside/db/schema';
 import { HttpError } from '../http/errors.ts';
 import { refuseTrailingData, sniffImageType } from './sniff.ts';
 
 // The upload pipeline after the bytes arrive: sniff → pixel limit (before decoding) → refuse
-// trailing data → orient → sRGB → strip metadata → web rendition and thumbnail → palette.
+// trailing data → one decode (oriented, sRGB, web size, no metadata) → web rendition, thumbnail,
+// palette and marked area, all from those decoded pixels.
 
 export const WEB_MAX_PX = 1600;
 export const THUMB_MAX_PX = 400;
@@ -26,12 +27,59 @@ export interface ProcessedImage {
   web: Rendition;
   thumb: Rendition;
   palette: StoredSwatch[];
+  /** RGBA pixels of `sampleArea`, at most AREA_SAMPLE_MAX_PX a side; empty without one. */
+  areaSample: Uint8Array;
+}
+
+/** A rectangle in fractions of the upright picture's width and height. */
+export interface AreaFractions {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
 }
 
 export interface ProcessOptions {
   maxPixels: number;
   /** Swatches of the whole image's palette; 0 skips it (a shared skein reads its yarn area). */
   swatchCount: number;
+  /** An area to hand back as pixels (a skein's marked yarn), read in the same turn. */
+  sampleArea?: AreaFractions;
+}
+
+/** An area is sampled from a copy this small: enough pixels for k-means, quick to read. */
+export const AREA_SAMPLE_MAX_PX = 128;
+
+/** The area in whole pixels, at least one pixel, inside the picture. */
+function areaPixels(width: number, height: number, area: AreaFractions) {
+  const left = Math.min(width - 1, Math.floor(area.x * width));
+  const top = Math.min(height - 1, Math.floor(area.y * height));
+  return {
+    left,
+    top,
+    width: Math.max(1, Math.min(width - left, Math.round(area.width * width))),
+    height: Math.max(1, Math.min(height - top, Math.round(area.height * height))),
+  };
+}
+
+/** RGBA pixels of an area of a picture, shrunk to at most AREA_SAMPLE_MAX_PX a side. */
+export async function sampleAreaOf(
+  picture: Sharp,
+  width: number,
+  height: number,
+  area: AreaFractions,
+): Promise<Uint8Array> {
+  return picture
+    .extract(areaPixels(width, height, area))
+    .resize({
+      width: AREA_SAMPLE_MAX_PX,
+      height: AREA_SAMPLE_MAX_PX,
+      fit: 'inside',
+      withoutEnlargement: true,
+    })
+    .ensureAlpha()
+    .raw()
+    .toBuffer();
 }
 
 // Decoding a phone photo takes a core and tens of megabytes: at most one image per core is in
@@ -65,7 +113,7 @@ const unreadable = () =>
   );
 
 /** Reads only the header: width × height is checked before a single pixel is decoded. */
-async function refuseTooManyPixels(bytes: Uint8Array, maxPixels: number): Promise<void> {
+async function readHeader(bytes: Uint8Array, maxPixels: number): Promise<Metadata> {
   const header = await sharp(bytes, { limitInputPixels: false })
     .metadata()
     .catch(() => {
@@ -80,18 +128,24 @@ async function refuseTooManyPixels(bytes: Uint8Array, maxPixels: number): Promis
       `This image is ${width} × ${height} pixels, more than the ${megapixels} megapixels we accept. Resize it and try again.`,
     );
   }
+  return header;
 }
 
+/** Pixels decoded once, upright, in sRGB, at most WEB_MAX_PX a side: every output comes from them. */
+interface Decoded {
+  pixels: Buffer;
+  raw: { width: number; height: number; channels: 1 | 2 | 3 | 4 };
+}
+
+const fromDecoded = ({ pixels, raw }: Decoded) => sharp(pixels, { raw });
+
 /**
- * A fresh JPEG: orientation applied, converted from its embedded profile (e.g. Display P3) to
- * sRGB, transparency flattened onto white. Without `keepMetadata`/`withMetadata` sharp writes
- * no EXIF, XMP, IPTC or ICC data.
+ * A fresh JPEG. Sharp writes no EXIF, XMP, IPTC or ICC data without `keepMetadata`/`withMetadata`,
+ * and raw pixels carry none to begin with.
  */
-async function render(input: Sharp, maxPx: number): Promise<Rendition> {
+async function encode(input: Sharp, maxPx: number): Promise<Rendition> {
   const { data, info } = await input
     .resize({ width: maxPx, height: maxPx, fit: 'inside', withoutEnlargement: true })
-    .flatten({ background: '#ffffff' })
-    .toColourspace('srgb')
     // Plain libjpeg with optimized Huffman tables: mozjpeg's trellis search cost more time per
     // photo than the few percent of bytes it saved.
     .jpeg({ quality: 82, optimiseCoding: true })
@@ -99,8 +153,25 @@ async function render(input: Sharp, maxPx: number): Promise<Rendition> {
   return { data, width: info.width, height: info.height, contentType: OUTPUT_TYPE };
 }
 
-export async function paletteOf(web: Buffer, swatchCount: number): Promise<StoredSwatch[]> {
-  const { data, info } = await sharp(web)
+/**
+ * The one decode of the upload: `failOn: 'error'` refuses damaged and truncated data; `rotate()`
+ * applies the EXIF orientation; resizing straight after lets libjpeg decode at a fraction of full
+ * size (shrink-on-load); `sequentialRead` reads the input top to bottom once. An embedded profile
+ * (e.g. Display P3) is converted to sRGB by sharp itself; other color spaces (grey, CMYK) and
+ * transparency are handled only when the header says they are there.
+ */
+async function decode(bytes: Uint8Array, header: Metadata, maxPixels: number): Promise<Decoded> {
+  let picture = sharp(bytes, { limitInputPixels: maxPixels, failOn: 'error', sequentialRead: true })
+    .rotate()
+    .resize({ width: WEB_MAX_PX, height: WEB_MAX_PX, fit: 'inside', withoutEnlargement: true });
+  if (header.hasAlpha) picture = picture.flatten({ background: '#ffffff' });
+  if (header.space !== 'srgb' || header.channels !== 3) picture = picture.toColourspace('srgb');
+  const { data, info } = await picture.raw().toBuffer({ resolveWithObject: true });
+  return { pixels: data, raw: { width: info.width, height: info.height, channels: info.channels } };
+}
+
+async function paletteOf(decoded: Decoded, swatchCount: number): Promise<StoredSwatch[]> {
+  const { data, info } = await fromDecoded(decoded)
     .resize({ width: PALETTE_MAX_PX, height: PALETTE_MAX_PX, fit: 'inside' })
     .ensureAlpha()
     .raw()
@@ -117,24 +188,19 @@ export async function processImage(
   options: ProcessOptions,
 ): Promise<ProcessedImage> {
   const type = await sniffImageType(bytes);
-  await refuseTooManyPixels(bytes, options.maxPixels);
+  const header = await readHeader(bytes, options.maxPixels);
   refuseTrailingData(bytes, type);
   return inTurn(async () => {
     try {
-      // `failOn: 'error'` refuses damaged and truncated data; `rotate()` applies EXIF orientation;
-      // resizing straight after lets libjpeg decode at a fraction of full size (shrink-on-load),
-      // and `sequentialRead` reads the input top to bottom once.
-      const decoded = sharp(bytes, {
-        limitInputPixels: options.maxPixels,
-        failOn: 'error',
-        sequentialRead: true,
-      }).rotate();
-      const web = await render(decoded, WEB_MAX_PX);
-      // The thumbnail and the palette come from the web rendition, never the original: decoding
-      // the 1600 px JPEG at a quarter scale (shrink-on-load again) costs a fraction of a phone photo.
-      const thumb = await render(sharp(web.data), THUMB_MAX_PX);
-      const palette = options.swatchCount > 0 ? await paletteOf(web.data, options.swatchCount) : [];
-      return { web, thumb, palette };
+      const decoded = await decode(bytes, header, options.maxPixels);
+      const { width, height } = decoded.raw;
+      const web = await encode(fromDecoded(decoded), WEB_MAX_PX);
+      const thumb = await encode(fromDecoded(decoded), THUMB_MAX_PX);
+      const palette = options.swatchCount > 0 ? await paletteOf(decoded, options.swatchCount) : [];
+      const areaSample = options.sampleArea
+        ? await sampleAreaOf(fromDecoded(decoded), width, height, options.sampleArea)
+        : new Uint8Array(0);
+      return { web, thumb, palette, areaSample };
     } catch (error) {
       if (error instanceof HttpError) throw error;
       throw unreadable();
