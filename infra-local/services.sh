@@ -43,6 +43,6 @@ build_apps() {
 start_app_server() {
   require_free_port "$APP_PORT" "the Vatside server" APP_PORT
   export APPS_DIR="$VATSIDE_ROOT/apps"
-  run_in_background server bash -c "cd '$VATSIDE_ROOT/apps/server' && exec node --import tsx src/main.ts"
+  run_in_background server bash "$VATSIDE_ROOT/apps/server/serve.sh"
   wait_for_port "$APP_PORT" "The Vatside server" 240
 }

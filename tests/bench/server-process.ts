@@ -3,7 +3,8 @@ import { createServer } from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-// One server process for a benchmark, started the way `npm start` runs it, on a free port.
+// One server process for a benchmark, started the way `npm start` runs it (serve.sh, which execs
+// node, so the child's pid is the server's), on a free port.
 
 const serverDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../apps/server');
 
@@ -24,7 +25,7 @@ export async function startServerProcess(
 ): Promise<{ child: ChildProcess; url: string }> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, ['--import', 'tsx', 'src/main.ts'], {
+  const child = spawn('bash', ['serve.sh'], {
     cwd: serverDir,
     env: {
       ...process.env,

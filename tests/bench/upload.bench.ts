@@ -1,4 +1,4 @@
-// pnpm bench:upload [--shares 20]
+// pnpm bench:upload [--shares 20] [--warmup 5]
 //
 // One server process (a child, as `npm start` runs it) and N viewers sharing a skein at the same
 // moment: each share is one 12-megapixel JPEG through the real route (sniffing, pixel limit,
@@ -22,8 +22,11 @@ import {
 } from '../../apps/server/src/test-support/sharing-fixtures.ts';
 import { startServerProcess } from './server-process.ts';
 
-const { values: args } = parseArgs({ options: { shares: { type: 'string', default: '20' } } });
+const { values: args } = parseArgs({
+  options: { shares: { type: 'string', default: '20' }, warmup: { type: 'string', default: '5' } },
+});
 const shareCount = Math.min(200, Math.max(1, Number(args.shares)));
+const warmupCount = Math.min(50, Math.max(0, Number(args.warmup)));
 const targets = { medianS: 1.5, peakMemoryMb: 700 };
 
 const say = (text: string) => console.log(`[bench:upload] ${text}`);
@@ -70,17 +73,25 @@ async function main() {
     });
     if (studio.status !== 201) throw new Error(`studio: ${studio.status}`);
     const month = await makeSharingMonth(host, slug);
+    // The body is encoded once: the load generator shares the machine's cores with the server,
+    // and encoding 20 multipart bodies at once would take CPU the server is measured on.
+    const body = await encodeForm(shareForm([photo], { ...baseDetails, crops: [YARN_ON_LEFT] }));
+    const share = () => host.request('POST', sharePath({ slug }, month.dyeAlong.id), body);
+    // A few shares one after another first: a server at a live event has been running, so the
+    // burst is measured after the JIT has compiled the route, not during its first seconds.
+    for (let i = 0; i < warmupCount; i++) {
+      const res = await share();
+      if (res.status !== 201) throw new Error(`warm-up share: ${res.status} ${await res.text()}`);
+    }
+    say(`${warmupCount} warm-up shares done, one after another; now ${shareCount} at once`);
     const baselineMb = peakMemoryMb(child.pid!);
     const cpuBefore = cpuSeconds(child.pid!);
     const loadBefore = loadavg()[0]!;
 
-    // The form is encoded once: the load generator shares the machine's cores with the server,
-    // and encoding 20 multipart bodies at once would take CPU the server is measured on.
-    const body = await encodeForm(shareForm([photo], { ...baseDetails, crops: [YARN_ON_LEFT] }));
     const results = await Promise.all(
       Array.from({ length: shareCount }, async () => {
         const started = performance.now();
-        const res = await host.request('POST', sharePath({ slug }, month.dyeAlong.id), body);
+        const res = await share();
         const ms = performance.now() - started;
         return { ms, ok: res.status === 201, detail: res.status === 201 ? '' : await res.text() };
       }),
