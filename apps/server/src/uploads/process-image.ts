@@ -82,15 +82,14 @@ export async function sampleAreaOf(
     .toBuffer();
 }
 
-// Decoding a phone photo takes a core and tens of megabytes. Images go through one at a time per
-// core but one, each on one libvips thread, and the rest wait their turn (first come, first
-// served): the core left over keeps the event loop receiving uploads and answering everyone
-// else, and twenty shares at once finish one after another instead of all at the end. On two
-// cores bench:upload measured this ahead of one image per core, which starved the event loop.
+// Decoding a phone photo takes a core and tens of megabytes: at most one image per core is in
+// the pipeline, each on one libvips thread, and the rest wait their turn (first come, first
+// served). Twenty shares at once then finish one after another instead of all at the end, and
+// memory stays bounded.
 sharp.concurrency(1);
 // Every upload is a new buffer, so libvips' operation cache never hits; it would only hold memory.
 sharp.cache(false);
-const IMAGE_SLOTS = Math.max(1, availableParallelism() - 1);
+const IMAGE_SLOTS = Math.max(1, availableParallelism());
 let busy = 0;
 const waiting: (() => void)[] = [];
 
