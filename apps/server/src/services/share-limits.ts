@@ -1,4 +1,4 @@
-import { and, count, eq, gt, min, sql, sum } from '@vatside/db/sql';
+import { and, eq, gt, sql, sum } from '@vatside/db/sql';
 import type { Database } from '@vatside/db/client';
 import { submissionPhotos, submissions } from '@vatside/db/schema';
 import { HttpError } from '../http/errors.ts';
@@ -15,18 +15,47 @@ const HOUR_MS = 60 * 60 * 1000;
 
 const megabytes = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MB`;
 
+interface Usage {
+  /** Shares since `since`, and when the oldest of them was made. */
+  recent: number;
+  oldestRecent: string | Date | null;
+  /** Stored bytes of the person's skein photos in the studio (web renditions, as recorded). */
+  bytes: number;
+}
+
+/** One person's use of one studio, in one query (a share checks it three times). */
+async function sharerUsage(
+  db: Pick<Database, 'select'>,
+  who: { studioId: string; sharerId: string },
+  since: Date,
+): Promise<Usage> {
+  const isRecent = gt(submissions.createdAt, since);
+  const [usage] = await db
+    .select({
+      // Distinct: the join repeats a share once per photo.
+      recent: sql<number>`count(distinct ${submissions.id}) filter (where ${isRecent})`.mapWith(
+        Number,
+      ),
+      oldestRecent: sql<string | null>`min(${submissions.createdAt}) filter (where ${isRecent})`,
+      bytes: sum(submissionPhotos.bytes).mapWith(Number),
+    })
+    .from(submissions)
+    .leftJoin(submissionPhotos, eq(submissionPhotos.submissionId, submissions.id))
+    .where(and(eq(submissions.studioId, who.studioId), eq(submissions.sharerUserId, who.sharerId)));
+  return {
+    recent: usage?.recent ?? 0,
+    oldestRecent: usage?.oldestRecent ?? null,
+    bytes: usage?.bytes ?? 0,
+  };
+}
+
 /** Stored bytes of one person's skein photos in one studio (web renditions, as recorded). */
 export async function sharerBytes(
   db: Pick<Database, 'select'>,
   studioId: string,
   sharerId: string,
 ): Promise<number> {
-  const [used] = await db
-    .select({ bytes: sum(submissionPhotos.bytes).mapWith(Number) })
-    .from(submissionPhotos)
-    .innerJoin(submissions, eq(submissions.id, submissionPhotos.submissionId))
-    .where(and(eq(submissions.studioId, studioId), eq(submissions.sharerUserId, sharerId)));
-  return used?.bytes ?? 0;
+  return (await sharerUsage(db, { studioId, sharerId }, new Date())).bytes;
 }
 
 /**
@@ -41,19 +70,9 @@ export async function checkShareLimits(
   incomingBytes = 0,
   now = new Date(),
 ): Promise<void> {
-  const since = new Date(now.getTime() - HOUR_MS);
-  const [recent] = await db
-    .select({ n: count(), oldest: min(submissions.createdAt) })
-    .from(submissions)
-    .where(
-      and(
-        eq(submissions.studioId, who.studioId),
-        eq(submissions.sharerUserId, who.sharerId),
-        gt(submissions.createdAt, since),
-      ),
-    );
-  if ((recent?.n ?? 0) >= limits.sharesPerHour) {
-    const oldestMs = recent?.oldest ? new Date(recent.oldest).getTime() : now.getTime();
+  const usage = await sharerUsage(db, who, new Date(now.getTime() - HOUR_MS));
+  if (usage.recent >= limits.sharesPerHour) {
+    const oldestMs = usage.oldestRecent ? new Date(usage.oldestRecent).getTime() : now.getTime();
     const waitS = Math.max(1, Math.ceil((oldestMs + HOUR_MS - now.getTime()) / 1000));
     const minutes = Math.ceil(waitS / 60);
     throw new HttpError(
@@ -64,7 +83,7 @@ export async function checkShareLimits(
       { 'Retry-After': String(waitS) },
     );
   }
-  const used = await sharerBytes(db, who.studioId, who.sharerId);
+  const used = usage.bytes;
   const full =
     incomingBytes === 0
       ? used >= limits.storageQuotaBytes
