@@ -5,7 +5,14 @@ import { describe, expect, it } from 'vitest';
 import { kelpwhistleDetail } from '../../testing/fixtures.ts';
 import { renderApp } from '../../testing/render-app.tsx';
 import { server, signIn } from '../../testing/server.ts';
-import { adaFollowing, mySkeinsApi, mySkeinsPath, skein } from '../../testing/sharing-fixtures.ts';
+import { dyeAlongApi } from '../../testing/dye-along-fixtures.ts';
+import {
+  adaFollowing,
+  mySkeinsApi,
+  mySkeinsPath,
+  openForSharing,
+  skein,
+} from '../../testing/sharing-fixtures.ts';
 
 const firstLoad = { timeout: 5_000 };
 const ids = {
@@ -47,6 +54,7 @@ function serveMySkeins() {
     http.get('/api/studios/kelpwhistle-dyeworks', () =>
       HttpResponse.json(kelpwhistleDetail({ myRole: 'viewer' })),
     ),
+    http.get(`${dyeAlongApi}/public`, () => HttpResponse.json(openForSharing())),
     http.get(mySkeinsApi, () =>
       HttpResponse.json({ items, page: { limit: 100, offset: 0, total: items.length } }),
     ),
@@ -124,6 +132,26 @@ describe('My skeins', () => {
           dyesUsed: ['teal gel'],
           notes: 'A sharper photo by the window.',
         },
+      },
+    ]);
+  });
+
+  it('names the colorway that inspired a skein shared without one', async () => {
+    const sent = serveMySkeins();
+    const { user } = renderApp(mySkeinsPath);
+    await screen.findByRole('listitem', { name: 'Harbor DK' }, firstLoad);
+    await user.click(within(card('Harbor DK')).getByRole('button', { name: /Change details/ }));
+    const choice = await within(card('Harbor DK')).findByLabelText('Which colorway inspired it?');
+    await user.selectOptions(choice, 'Pool Teal');
+    await user.click(within(card('Harbor DK')).getByRole('button', { name: 'Save changes' }));
+    expect(await within(card('Harbor DK')).findByText('Waiting for review')).toBeVisible();
+    expect(sent).toEqual([
+      {
+        method: 'PATCH',
+        id: ids.sentBack,
+        body: expect.objectContaining({
+          colorwayId: openForSharing().supplyList.colorways[0]!.colorwayId,
+        }),
       },
     ]);
   });

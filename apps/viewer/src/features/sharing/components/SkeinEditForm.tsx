@@ -1,14 +1,18 @@
+import { useQuery } from '@tanstack/react-query';
 import type { Submission, YarnCrop } from '@vatside/contracts/submissions';
 import { Button } from '@vatside/ui/Button';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { useState, type FormEvent } from 'react';
-import { useUpdateSkein } from '../api.ts';
+import { sharingDyeAlongQueryOptions, useUpdateSkein } from '../api.ts';
 import { tidyCrop } from '../crop.ts';
 import { detailsOf, draftOf, type DetailErrors } from '../details.ts';
 import { DetailsFields } from './DetailsFields.tsx';
 import { YarnAreaEditor } from './YarnAreaEditor.tsx';
 
-/** Change the details and the yarn areas of a skein still waiting or sent back. */
+/**
+ * Change the details, the inspiring colorway and the yarn areas of a skein still waiting or sent
+ * back. The colorway choice appears once the month's colorways have loaded.
+ */
 export function SkeinEditForm({
   slug,
   skein,
@@ -24,19 +28,25 @@ export function SkeinEditForm({
   );
   const [errors, setErrors] = useState<DetailErrors>({});
   const update = useUpdateSkein(slug);
+  const month = useQuery(sharingDyeAlongQueryOptions(slug, skein.dyeAlong.id));
+  const colorways =
+    month.data?.supplyList.colorways.map((c) => ({ colorwayId: c.colorwayId, name: c.name })) ?? [];
 
   function submit(event: FormEvent) {
     event.preventDefault();
     const { errors: found, value } = detailsOf(draft);
     setErrors(found);
     if (Object.keys(found).length > 0) return;
-    const { colorwayId: _unchanged, ...details } = value;
+    // The colorway goes only when it changed, and only once the choice was on the screen.
+    const { colorwayId, ...details } = value;
+    const recolored = colorways.length > 0 && colorwayId !== (skein.colorway?.id ?? null);
     const moved = skein.photos.filter((p) => crops[p.id] !== p.yarnCrop);
     update.mutate(
       {
         id: skein.id,
         patch: {
           ...details,
+          ...(recolored ? { colorwayId } : {}),
           ...(moved.length
             ? { crops: moved.map((p) => ({ photoId: p.id, crop: tidyCrop(crops[p.id]!) })) }
             : {}),
@@ -62,7 +72,7 @@ export function SkeinEditForm({
           />
         </div>
       ))}
-      <DetailsFields draft={draft} onChange={setDraft} errors={errors} colorways={[]} />
+      <DetailsFields draft={draft} onChange={setDraft} errors={errors} colorways={colorways} />
       <div className="grid gap-3 sm:grid-cols-2">
         <Button type="submit" size="hand" disabled={update.isPending}>
           {update.isPending ? 'Saving…' : 'Save changes'}
