@@ -120,6 +120,8 @@ export const auditEntrySchema = z.object({
   reason: z.string().nullable(),
   /** Null once the person's account is gone. */
   actor: z.object({ userId: z.string(), name: z.string() }).nullable(),
+  /** The skein decided on, by its maker and base; null once it was withdrawn. */
+  skein: z.object({ makerName: z.string().nullable(), baseName: z.string() }).nullable(),
   createdAt: z.string(),
 });
 export type AuditEntry = z.infer<typeof auditEntrySchema>;

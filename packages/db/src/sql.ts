@@ -23,3 +23,4 @@ export {
   sum,
 } from 'drizzle-orm';
 export type { SQL } from 'drizzle-orm';
+export { alias } from 'drizzle-orm/pg-core';

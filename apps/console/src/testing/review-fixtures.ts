@@ -140,6 +140,7 @@ export const auditEntries: AuditEntry[] = [
     toStatus: 'needsChanges',
     reason: 'The photo is a little blurry. Please share a sharper one.',
     actor: { userId: 'u-oskar', name: 'Oskar Fenn' },
+    skein: { makerName: 'Ada Wren', baseName: 'Harbor DK' },
     createdAt: '2026-12-04T15:30:00.000Z',
   },
   {
@@ -151,6 +152,7 @@ export const auditEntries: AuditEntry[] = [
     toStatus: 'approved',
     reason: null,
     actor: null,
+    skein: null,
     createdAt: '2026-12-03T09:00:00.000Z',
   },
 ];

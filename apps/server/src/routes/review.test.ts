@@ -88,6 +88,7 @@ describe('review: the queue, decisions, the audit and the sharer’s e-mails', (
       fromStatus: 'waiting',
       toStatus: 'approved',
       actor: { userId: cast.people.moderator.userId, name: 'Mina Moderator' },
+      skein: { makerName: 'Vale Viewer', baseName: skein.baseName },
     });
     expect(new Date(log.items[0]!.createdAt).getTime()).toBeGreaterThanOrEqual(before - 1000);
   });

@@ -1,4 +1,4 @@
-import { and, asc, desc, eq } from '@vatside/db/sql';
+import { alias, and, asc, desc, eq } from '@vatside/db/sql';
 import {
   REVIEW_REASON_TEMPLATES,
   type AuditList,
@@ -148,6 +148,9 @@ export async function decideMany(
   return { results };
 }
 
+/** Who shared the skein a decision was about (a second join on the user table). */
+const maker = alias(user, 'maker');
+
 export async function auditLog(
   db: Database,
   studio: StudioRef,
@@ -160,9 +163,16 @@ export async function auditLog(
   );
   const [rows, total] = await Promise.all([
     db
-      .select({ decision: reviewDecisions, actorName: user.name })
+      .select({
+        decision: reviewDecisions,
+        actorName: user.name,
+        baseName: submissions.baseName,
+        makerName: maker.name,
+      })
       .from(reviewDecisions)
       .leftJoin(user, eq(user.id, reviewDecisions.actorUserId))
+      .leftJoin(submissions, eq(submissions.id, reviewDecisions.submissionId))
+      .leftJoin(maker, eq(maker.id, submissions.sharerUserId))
       .where(where)
       .orderBy(desc(reviewDecisions.createdAt), desc(reviewDecisions.id))
       .limit(query.limit)
@@ -170,7 +180,7 @@ export async function auditLog(
     db.$count(reviewDecisions, where),
   ]);
   return {
-    items: rows.map(({ decision: d, actorName }) => ({
+    items: rows.map(({ decision: d, actorName, baseName, makerName }) => ({
       id: d.id,
       submissionId: d.submissionId,
       dyeAlongId: d.dyeAlongId,
@@ -179,6 +189,7 @@ export async function auditLog(
       toStatus: d.toStatus,
       reason: d.reason,
       actor: d.actorUserId && actorName ? { userId: d.actorUserId, name: actorName } : null,
+      skein: baseName === null ? null : { makerName, baseName },
       createdAt: d.createdAt.toISOString(),
     })),
     page: pageInfo(query, total),

@@ -171,7 +171,7 @@ describe('Bulk decisions on a selection', () => {
 });
 
 describe('The review audit', () => {
-  it('lists each decision with who, when, the change and the reason', async () => {
+  it('lists each decision with who, when, the skein, the change and the reason', async () => {
     reviewQueueServer();
     server.use(
       http.get(`${studioApi}/review/audit`, () =>
@@ -185,7 +185,10 @@ describe('The review audit', () => {
     expect(rows[0]).toHaveTextContent('Asked for a change');
     expect(rows[0]).toHaveTextContent('Waiting → Sent back for a change');
     expect(rows[0]).toHaveTextContent('The photo is a little blurry.');
+    // The skein by its base and maker, not only by an id.
+    expect(rows[0]).toHaveTextContent('Harbor DK by Ada Wren');
     expect(rows[1]).toHaveTextContent('A removed account');
+    expect(rows[1]).toHaveTextContent('A withdrawn skein');
     expect(rows[1]).toHaveTextContent('Waiting → In the gallery');
   });
 });

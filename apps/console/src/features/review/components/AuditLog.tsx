@@ -48,10 +48,17 @@ export function AuditLog({ slug }: { slug: string }) {
       id: 'skein',
       header: 'Skein',
       cell: ({ row }) => (
-        <span className="block text-sm whitespace-nowrap">
-          {titles.get(row.original.dyeAlongId) ?? 'Dye-along'}
-          <span className="block font-mono text-vat-800">
-            #{row.original.submissionId.slice(0, 8)}
+        <span className="block text-sm">
+          {row.original.skein ? (
+            <span className="block font-bold">
+              {row.original.skein.baseName} by {row.original.skein.makerName ?? 'a removed account'}
+            </span>
+          ) : (
+            <span className="block">A withdrawn skein</span>
+          )}
+          <span className="block whitespace-nowrap text-vat-800">
+            {titles.get(row.original.dyeAlongId) ?? 'Dye-along'} · #
+            {row.original.submissionId.slice(0, 8)}
           </span>
         </span>
       ),
