@@ -9,7 +9,9 @@ import {
 import type { Base } from '@vatside/contracts/workbench-bases';
 import type { ColorwaySummary } from '@vatside/contracts/workbench-colorways';
 import type { Dye } from '@vatside/contracts/workbench-shelf';
+import type { Image } from '@vatside/contracts/workbench-images';
 import { deltaE2000, hexToLab } from '@vatside/dye-kit';
+import sharp from 'sharp';
 import type { RunningServer } from '../server.ts';
 import { makeDyeAlong } from '../test-support/dye-along-fixtures.ts';
 import { makeLiveSessions, type TestLive } from '../test-support/live-fixtures.ts';
@@ -21,6 +23,8 @@ import { startTestServer } from '../test-support/test-server.ts';
 // a 500 mL jar). The host logs 210 mL. Formulas: dye mass = WOG × DOS ÷ 100, stock mL = WOG × DOS
 // ÷ strength (common practice, shared/reference/README.md).
 const loggedMl = 210;
+/** The finished skeins of a colorway planned without target swatches, photographed flat. */
+const seaGlassHex = '#7fb8a4';
 
 async function json<T>(res: Response, status = 200): Promise<T> {
   if (res.status !== status)
@@ -109,13 +113,40 @@ describe('archive and dye again (real server, real database)', () => {
       );
       ids.push(colorway.id);
     }
+    // A fourth, planned by eye with no target swatches: only its photo says what color it is.
+    const seaGlass = await json<ColorwaySummary>(
+      await host().request('POST', at('/colorways'), {
+        name: 'Sea Glass',
+        technique: 'immersion',
+        baseId: secondBase.id,
+        recipeLines: [{ kind: 'foodColor', dyeId: moss.id, amountPer100g: 0.5, unit: 'gGel' }],
+      }),
+      201,
+    );
     const month = await makeDyeAlong(host(), cast.slug, {
       title: 'Rock pools',
       startsAt: new Date(Date.now() + 30 * 60_000).toISOString(),
-      colorwayIds: ids,
+      colorwayIds: [...ids, seaGlass.id],
     });
     await move(month.id, 'announced');
-    await archiveThrough(month.id, 'announced');
+    await move(month.id, 'live');
+    const photo = new FormData();
+    photo.append('purpose', 'colorwayPhoto');
+    photo.append('colorwayId', seaGlass.id);
+    photo.append('swatchCount', '1');
+    const png = await sharp({
+      create: { width: 64, height: 48, channels: 3, background: seaGlassHex },
+    })
+      .png()
+      .toBuffer();
+    photo.append('image', new Blob([new Uint8Array(png)], { type: 'image/png' }), 'sea-glass.png');
+    const image = await json<Image>(await host().request('POST', at('/images'), photo), 201);
+    await json(
+      await host().request('PUT', at(`/dye-alongs/${month.id}/bath-records/${seaGlass.id}`), {
+        photoImageIds: [image.id],
+      }),
+    );
+    await archiveThrough(month.id, 'live');
   });
   afterAll(() => server.close());
 
@@ -229,7 +260,7 @@ describe('archive and dye again (real server, real database)', () => {
   it('finds colorways nearest a color first, by CIEDE2000', async () => {
     const picked = '#2f8a7c';
     const { items } = await search(`hex=${encodeURIComponent(picked)}`);
-    expect(items.map((i) => i.colorwayName)).toHaveLength(4);
+    expect(items.map((i) => i.colorwayName)).toHaveLength(5);
     // Reference: dye-kit's deltaE2000, checked against Sharma, Wu & Dalal (2005) Table 1 and
     // colorjs.io in dye-kit's color tests; here it checks the ordering and the reported values.
     const reference = (hex: string) => deltaE2000(hexToLab(picked), hexToLab(hex));
@@ -248,17 +279,27 @@ describe('archive and dye again (real server, real database)', () => {
     });
   });
 
+  it('finds a colorway planned without swatches by the colors of its finished-skein photo', async () => {
+    const [first] = (await search(`hex=${encodeURIComponent(seaGlassHex)}`)).items;
+    expect(first?.colorwayName).toBe('Sea Glass');
+    // The photo is one flat color, so its palette is that color: ΔE2000 under 1, the usual
+    // threshold of a just-noticeable difference (common practice).
+    expect(first?.deltaE2000).toBeLessThan(1);
+    expect(first?.swatches).toHaveLength(1);
+  });
+
   it('filters by base, by dye and by month', async () => {
     const byBase = await search(`baseId=${secondBase.id}`);
     expect(byBase.items.map((i) => i.colorwayName).sort()).toEqual([
       'Coralline',
       'Kelp Bed',
       'Ochre Rock',
+      'Sea Glass',
     ]);
     const byDye = await search(`dyeId=${moss.id}`);
-    expect(byDye.page.total).toBe(3);
+    expect(byDye.page.total).toBe(4);
     const month = byBase.items[0]!.month;
-    expect((await search(`month=${month}`)).page.total).toBeGreaterThanOrEqual(3);
+    expect((await search(`month=${month}`)).page.total).toBeGreaterThanOrEqual(4);
     expect((await search('month=2001-01')).page.total).toBe(0);
     expect((await host().request('GET', at('/archive?hex=teal'))).status).toBe(400);
   });

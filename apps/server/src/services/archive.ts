@@ -75,9 +75,43 @@ async function archivedRows(db: Database, studioId: string, id?: string) {
   return rows.map(({ row, month }) => ({ row: row as ArchiveRow, month }));
 }
 
+type Swatch = { hex: string; name: string };
+
+/**
+ * A colorway's colors for search and lists: its target swatches, or when it was planned without
+ * any, the colors found in the photos of its finished skeins (each workbench image keeps its
+ * palette), so a colorway is found by color either way.
+ */
+async function colorsOf(db: Database, rows: ArchiveRow[]): Promise<Map<string, Swatch[]>> {
+  const untargeted = rows.filter((r) => r.snapshot.targetSwatches.length === 0);
+  const imageIds = [...new Set(untargeted.flatMap((r) => r.photoImageIds))];
+  const palettes = new Map<string, Swatch[]>();
+  if (imageIds.length > 0) {
+    const found = await db
+      .select({ id: images.id, palette: images.palette })
+      .from(images)
+      .where(inArray(images.id, imageIds));
+    for (const image of found) {
+      palettes.set(
+        image.id,
+        image.palette.map((s) => ({ hex: s.hex, name: s.label || s.name })),
+      );
+    }
+  }
+  return new Map(
+    rows.map((r) => [
+      r.id,
+      r.snapshot.targetSwatches.length > 0
+        ? r.snapshot.targetSwatches
+        : r.photoImageIds.flatMap((id) => palettes.get(id) ?? []),
+    ]),
+  );
+}
+
 function toSummary(
   row: ArchiveRow,
   month: MonthRow,
+  swatches: Swatch[],
   deltaE: number | null,
 ): ArchivedColorwaySummary {
   const s = row.snapshot;
@@ -91,22 +125,22 @@ function toSummary(
     monthLabel: monthLabelOf(month),
     baseName: s.baseName,
     dyeNames: s.lines.map((l) => l.name),
-    swatches: s.targetSwatches,
+    swatches,
     deltaE2000: deltaE === null ? null : round(deltaE),
     archivedAt: row.archivedAt!.toISOString(),
   };
 }
 
 /** The smallest CIEDE2000 from the color to any of the colorway's swatches; none: no match. */
-function nearestDeltaE(row: ArchiveRow, hex: string): number | null {
+function nearestDeltaE(swatches: Swatch[], hex: string): number | null {
   const target = hexToLab(hex);
-  const distances = row.snapshot.targetSwatches.map((s) => deltaE2000(target, hexToLab(s.hex)));
+  const distances = swatches.map((s) => deltaE2000(target, hexToLab(s.hex)));
   return distances.length ? Math.min(...distances) : null;
 }
 
 /**
  * Search by month, base and dye (filters), and by color: nearest first by CIEDE2000 (Sharma et
- * al. 2005, dye-kit) to any of the colorway's stored swatches. A studio archives a handful of
+ * al. 2005, dye-kit) to any of the colorway's colors (see colorsOf). A studio archives a handful of
  * colorways a month, so the filtering and the color distance run here rather than in SQL.
  */
 export async function searchArchive(
@@ -118,10 +152,15 @@ export async function searchArchive(
     .filter(({ month }) => !query.month || monthOf(month) === query.month)
     .filter(({ row }) => !query.baseId || row.snapshot.baseId === query.baseId)
     .filter(({ row }) => !query.dyeId || row.snapshot.lines.some((l) => l.dyeId === query.dyeId));
+  const colors = await colorsOf(
+    db,
+    rows.map((r) => r.row),
+  );
   let found = rows.map(({ row, month }) => ({
     row,
     month,
-    deltaE: query.hex ? nearestDeltaE(row, query.hex) : null,
+    swatches: colors.get(row.id) ?? [],
+    deltaE: query.hex ? nearestDeltaE(colors.get(row.id) ?? [], query.hex) : null,
   }));
   if (query.hex) {
     found = found
@@ -131,7 +170,7 @@ export async function searchArchive(
   return {
     items: found
       .slice(query.offset, query.offset + query.limit)
-      .map((f) => toSummary(f.row, f.month, f.deltaE)),
+      .map((f) => toSummary(f.row, f.month, f.swatches, f.deltaE)),
     page: pageInfo(query, found.length),
   };
 }
@@ -172,7 +211,7 @@ export async function archivedColorwayDetail(
     row,
   );
   return {
-    ...toSummary(row, month, null),
+    ...toSummary(row, month, (await colorsOf(db, [row])).get(row.id) ?? [], null),
     baseId: s.baseId,
     potName: s.potName,
     weightOfGoodsG: s.weightOfGoodsG,
