@@ -17,6 +17,11 @@ export type LiveStep = z.infer<typeof liveStepSchema>;
 export const liveProgramPotSchema = z.object({
   potId: z.string(),
   colorwayName: z.string(),
+  /**
+   * The colorway's target colors, each with its name (a color is never shown without words).
+   * Sessions started before pots carried colors have none.
+   */
+  swatches: z.array(z.object({ hex: z.string(), name: z.string() })).default([]),
   /** The host's recipe for one skein: phones rescale it to their own skein with dye-kit. */
   recipe: z.object({
     weightOfGoodsG: z.number().positive(),

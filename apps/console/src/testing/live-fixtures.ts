@@ -49,6 +49,7 @@ export const program: LiveProgram = {
     {
       potId: lowTideId,
       colorwayName: 'Low tide',
+      swatches: [{ hex: '#4f7f8c', name: 'Slate teal' }],
       recipe: {
         weightOfGoodsG: 100,
         liquorRatio: 30,
@@ -83,6 +84,7 @@ export const program: LiveProgram = {
     {
       potId: kelpShadeId,
       colorwayName: 'Kelp shade',
+      swatches: [],
       recipe: {
         weightOfGoodsG: 100,
         liquorRatio: 30,

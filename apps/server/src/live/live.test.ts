@@ -59,7 +59,9 @@ describe('live session over Socket.IO (real server, real database)', () => {
   beforeAll(async () => {
     server = await startTestServer();
     cast = await castStudio(server, 'live');
-    live = await makeLiveSessions(cast.clients.host, cast.slug);
+    live = await makeLiveSessions(cast.clients.host, cast.slug, [
+      { hex: '#1f6f78', name: 'Deep pool' },
+    ]);
   });
   afterAll(async () => {
     sockets.forEach((s) => s.disconnect());
@@ -77,6 +79,8 @@ describe('live session over Socket.IO (real server, real database)', () => {
       `/api/live-sessions/${live.liveSessionId}/program`,
     );
     const program = liveProgramSchema.parse(await res.json());
+    // Each pot carries its colorway's named target colors for the phones to show.
+    expect(program.pots[0]?.swatches).toEqual([{ hex: '#1f6f78', name: 'Deep pool' }]);
     expect(program.pots[0]?.steps.map((s) => s.caution)).toEqual([
       'none',
       'hotBath',

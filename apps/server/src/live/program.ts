@@ -31,6 +31,7 @@ export async function buildProgramPots(
   return rows.map(({ colorway }) => ({
     potId: colorway.id,
     colorwayName: colorway.name,
+    swatches: colorway.targetSwatches.map(({ hex, name }) => ({ hex, name })),
     recipe: {
       weightOfGoodsG: colorway.weightOfGoodsG,
       liquorRatio: colorway.liquorRatio,

@@ -55,12 +55,7 @@ describe('archive and dye again (real server, real database)', () => {
   beforeAll(async () => {
     server = await startTestServer();
     cast = await castStudio(server, 'archive');
-    live = await makeLiveSessions(host(), cast.slug);
-    await json(
-      await host().request('PATCH', at(`/colorways/${live.potId}`), {
-        targetSwatches: [{ hex: '#1f6f78', name: 'Deep pool' }],
-      }),
-    );
+    live = await makeLiveSessions(host(), cast.slug, [{ hex: '#1f6f78', name: 'Deep pool' }]);
 
     // The host logs 210 mL into the live pot (plan 200 mL), then ends nothing: the log stands.
     const socket = await openSocket(server.url, host());

@@ -328,6 +328,7 @@ export async function seedPastMonth(deps: PastMonthSeedDeps): Promise<void> {
     const pots: LiveProgramPot[] = made.map(({ row }) => ({
       potId: row.id,
       colorwayName: row.name,
+      swatches: row.targetSwatches.map(({ hex, name }) => ({ hex, name })),
       recipe: {
         weightOfGoodsG: row.weightOfGoodsG,
         liquorRatio: row.liquorRatio,

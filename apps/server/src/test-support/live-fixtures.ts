@@ -11,9 +11,22 @@ export interface TestLive {
   jarId: string;
 }
 
-/** An announced month starting in half an hour, with a running live session and a rehearsal. */
-export async function makeLiveSessions(host: TestClient, slug: string): Promise<TestLive> {
+/**
+ * An announced month starting in half an hour, with a running live session and a rehearsal.
+ * `targetSwatches` are set on the pot's colorway before the sessions fix their program.
+ */
+export async function makeLiveSessions(
+  host: TestClient,
+  slug: string,
+  targetSwatches: { hex: string; name: string }[] = [],
+): Promise<TestLive> {
   const { colorway, jar } = await makeMonth(host, slug);
+  if (targetSwatches.length > 0) {
+    const res = await host.request('PATCH', `/api/studios/${slug}/colorways/${colorway.id}`, {
+      targetSwatches,
+    });
+    if (res.status !== 200) throw new Error(`swatches failed: ${res.status} ${await res.text()}`);
+  }
   const dyeAlong = await makeDyeAlong(host, slug, {
     startsAt: new Date(Date.now() + 30 * 60_000).toISOString(),
     expectedLengthMin: 90,

@@ -18,6 +18,10 @@ export const program: LiveProgram = {
     {
       potId: 'pot-sea',
       colorwayName: 'Sea Glass',
+      swatches: [
+        { hex: '#7fb8a4', name: 'Frosted green' },
+        { hex: '#cfe3dc', name: 'Pale sea' },
+      ],
       recipe: {
         weightOfGoodsG: 100,
         liquorRatio: 30,
@@ -66,6 +70,7 @@ export const program: LiveProgram = {
     {
       potId: 'pot-rock',
       colorwayName: 'Rock Pool',
+      swatches: [],
       recipe: {
         weightOfGoodsG: 100,
         liquorRatio: 30,

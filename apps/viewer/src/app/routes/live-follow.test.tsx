@@ -47,8 +47,16 @@ describe('Follow-along', () => {
     expect(within(sea).getByText('of turquoise stock at 1 %')).toBeVisible();
     expect(within(sea).getByText(/\(US spoons\)$/)).toBeVisible();
     expect(within(sea).getByText('Lower the yarn in and hold just under a simmer')).toBeVisible();
+    // The pot's target colors, each named: a color is never shown without words.
+    const colors = within(sea).getByRole('list', { name: 'Colors of Sea Glass' });
+    expect(
+      within(colors)
+        .getAllByRole('listitem')
+        .map((li) => li.textContent),
+    ).toEqual(['Frosted green', 'Pale sea']);
 
     const rock = pot('Rock Pool');
+    expect(within(rock).queryByRole('list', { name: /^Colors of/ })).toBeNull();
     expect(within(rock).getByText('Drip the sky blue over the crown of the skein')).toBeVisible();
     // 10 drops per 100 g × 50 g = 5 drops, with a 20-drops-per-mL dropper on both sides.
     expect(within(rock).getByText('5 drops')).toBeVisible();

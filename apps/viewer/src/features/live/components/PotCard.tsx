@@ -4,6 +4,7 @@ import type { PotTimer } from '@vatside/contracts/pot-timer';
 import type { ScaledRecipe } from '@vatside/dye-kit';
 import { Button } from '@vatside/ui/Button';
 import { Card } from '@vatside/ui/Card';
+import { Swatch } from '@vatside/ui/Swatch';
 import { useId } from 'react';
 import { amountForLine, stepLineIndex } from '../utils/amounts.ts';
 import type { Kit } from '../../../lib/kit.ts';
@@ -46,6 +47,15 @@ export function PotCard(props: PotCardProps) {
           {own ? 'Your own pace' : 'With the host'}
         </span>
       </div>
+      {pot.swatches.length > 0 ? (
+        <ul aria-label={`Colors of ${pot.colorwayName}`} className="flex flex-wrap gap-x-5 gap-y-2">
+          {pot.swatches.map((s) => (
+            <li key={`${s.hex}-${s.name}`}>
+              <Swatch hex={s.hex} label={s.name} />
+            </li>
+          ))}
+        </ul>
+      ) : null}
 
       {/* Polite: a screen reader hears the new step, not every tick of the countdown. */}
       <div aria-live="polite" aria-atomic="true" className="space-y-1">
