@@ -22,6 +22,7 @@ import type { z } from 'zod';
 import { HttpError, notFound } from '../http/errors.ts';
 import type { ObjectStore } from '../storage/object-store.ts';
 import { processImage, type ProcessedImage } from '../uploads/process-image.ts';
+import { putAll } from '../uploads/store-renditions.ts';
 import { dyeAlongRow, type DyeAlongRow } from './dye-alongs.ts';
 import { recordDecision } from './review-record.ts';
 import { checkShareLimits, lockSharer, type ShareLimits } from './share-limits.ts';
@@ -174,10 +175,13 @@ export async function shareSkein(
   const keys = processed.map(() => skeinKeys(studio.id));
   let id: string;
   try {
-    for (const [i, p] of processed.entries()) {
-      await store.put(keys[i]!.webKey, p.web.data, p.web.contentType);
-      await store.put(keys[i]!.thumbKey, p.thumb.data, p.thumb.contentType);
-    }
+    await putAll(
+      store,
+      processed.flatMap((p, i) => [
+        { key: keys[i]!.webKey, rendition: p.web },
+        { key: keys[i]!.thumbKey, rendition: p.thumb },
+      ]),
+    );
     id = await db.transaction(async (tx) => {
       // Again under a per-sharer lock: two shares at once, in any process, cannot both fit.
       await lockSharer(tx, who);

@@ -18,7 +18,7 @@ export function newRenditionKeys(studioId: string): RenditionKeys {
  * for all before throwing matters: a caller that deletes on failure must not race a put that is
  * still writing.
  */
-async function putAll(
+export async function putAll(
   store: ObjectStore,
   objects: { key: string; rendition: Rendition }[],
 ): Promise<void> {
