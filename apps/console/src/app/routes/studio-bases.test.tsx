@@ -1,5 +1,5 @@
 import { screen, within } from '@testing-library/react';
-import type { Base, BaseCreate } from '@vatside/contracts/workbench-bases';
+import type { Base, BaseCreate, BaseUpdate } from '@vatside/contracts/workbench-bases';
 import { http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
 import { hostMe } from '../../testing/fixtures.ts';
@@ -83,5 +83,40 @@ describe('Bases & pots', { timeout: 30_000 }, () => {
     const table = await screen.findByRole('table', { name: 'Yarn bases' });
     expect(within(table).getByText('Driftwood DK')).toBeInTheDocument();
     expect(within(table).getByText(/Only 60 % of this yarn takes acid dye/)).toBeInTheDocument();
+  });
+
+  it('changes a base in place: the form opens with its values and saves them to the same base', async () => {
+    signIn(hostMe);
+    let bases: Base[] = [merinoBase];
+    workbenchAsHost();
+    const sent: { id: string; body: BaseUpdate }[] = [];
+    server.use(
+      http.get(`${studioApi}/bases`, () =>
+        HttpResponse.json({ items: bases, page: { limit: 25, offset: 0, total: bases.length } }),
+      ),
+      http.patch(`${studioApi}/bases/:baseId`, async ({ request, params }) => {
+        const body = (await request.json()) as BaseUpdate;
+        sent.push({ id: String(params.baseId), body });
+        bases = bases.map((b) => (b.id === params.baseId ? ({ ...b, ...body } as Base) : b));
+        return HttpResponse.json(bases[0]);
+      }),
+    );
+    const { user } = renderApp('/studios/kelpwhistle-dyeworks/bases');
+
+    const table = await screen.findByRole('table', { name: 'Yarn bases' }, firstRender);
+    await user.click(within(table).getByRole('button', { name: 'Change Harbor sock' }));
+    const form = screen.getByRole('form', { name: 'Change Harbor sock' });
+    expect(within(form).getByLabelText('Base name')).toHaveValue('Harbor sock');
+    await user.type(within(form).getByLabelText('Lot'), 'L-311');
+    await user.click(within(form).getByRole('button', { name: 'Save changes' }));
+
+    // The form closes and the add form is back; the row shows the saved base.
+    expect(await screen.findByRole('form', { name: 'Add a base' })).toBeVisible();
+    expect(sent).toEqual([
+      {
+        id: merinoBase.id,
+        body: expect.objectContaining({ name: 'Harbor sock', lot: 'L-311', skeinWeightG: 100 }),
+      },
+    ]);
   });
 });

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import type { Base, Pot } from '@vatside/contracts/workbench-bases';
 import { useState } from 'react';
 import { AddSection } from '../../components/AddSection.tsx';
 import { Pager } from '../../components/Pager.tsx';
@@ -19,6 +20,8 @@ export function Component() {
   const [potOffset, setPotOffset] = useState(0);
   const bases = useQuery(basesQueryOptions(slug, { ...firstPage, offset: baseOffset }));
   const pots = useQuery(potsQueryOptions(slug, { ...firstPage, offset: potOffset }));
+  const [editingBase, setEditingBase] = useState<Base>();
+  const [editingPot, setEditingPot] = useState<Pot>();
 
   return (
     <div className="space-y-6">
@@ -33,12 +36,26 @@ export function Component() {
         >
           {(list) => (
             <>
-              <BasesTable slug={slug} bases={list.items} canEdit={canEdit} />
+              <BasesTable
+                slug={slug}
+                bases={list.items}
+                canEdit={canEdit}
+                onEdit={setEditingBase}
+              />
               <Pager page={list.page} noun="bases" onOffset={setBaseOffset} />
             </>
           )}
         </QueryView>
-        {canEdit ? (
+        {canEdit && editingBase ? (
+          <AddSection title={`Change ${editingBase.name}`}>
+            <BaseForm
+              key={editingBase.id}
+              slug={slug}
+              editing={editingBase}
+              onDone={() => setEditingBase(undefined)}
+            />
+          </AddSection>
+        ) : canEdit ? (
           <AddSection title="Add a base">
             <BaseForm slug={slug} />
           </AddSection>
@@ -51,12 +68,21 @@ export function Component() {
         <QueryView query={pots} loading="Reading the pots…" failed="The pots could not be loaded">
           {(list) => (
             <>
-              <PotsTable slug={slug} pots={list.items} canEdit={canEdit} />
+              <PotsTable slug={slug} pots={list.items} canEdit={canEdit} onEdit={setEditingPot} />
               <Pager page={list.page} noun="pots" onOffset={setPotOffset} />
             </>
           )}
         </QueryView>
-        {canEdit ? (
+        {canEdit && editingPot ? (
+          <AddSection title={`Change ${editingPot.name}`}>
+            <PotForm
+              key={editingPot.id}
+              slug={slug}
+              editing={editingPot}
+              onDone={() => setEditingPot(undefined)}
+            />
+          </AddSection>
+        ) : canEdit ? (
           <AddSection title="Add a pot">
             <PotForm slug={slug} />
           </AddSection>

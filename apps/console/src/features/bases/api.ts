@@ -5,7 +5,9 @@ import {
   potListSchema,
   potSchema,
   type BaseCreate,
+  type BaseUpdate,
   type PotCreate,
+  type PotUpdate,
 } from '@vatside/contracts/workbench-bases';
 import { apiGet, apiSend } from '@vatside/ui/api-client.ts';
 import { studioApi, withPage, type PageAt } from '../../lib/studio-path.ts';
@@ -42,6 +44,11 @@ export const useCreateBase = (slug: string) =>
     apiSend('POST', studioApi(slug, 'bases'), base, baseSchema),
   );
 
+export const useUpdateBase = (slug: string) =>
+  useListMutation(keys.bases(slug), ({ id, patch }: { id: string; patch: BaseUpdate }) =>
+    apiSend('PATCH', studioApi(slug, 'bases', id), patch, baseSchema),
+  );
+
 export const useDeleteBase = (slug: string) =>
   useListMutation(keys.bases(slug), (baseId: string) =>
     apiSend('DELETE', studioApi(slug, 'bases', baseId)),
@@ -50,6 +57,11 @@ export const useDeleteBase = (slug: string) =>
 export const useCreatePot = (slug: string) =>
   useListMutation(keys.pots(slug), (pot: PotCreate) =>
     apiSend('POST', studioApi(slug, 'pots'), pot, potSchema),
+  );
+
+export const useUpdatePot = (slug: string) =>
+  useListMutation(keys.pots(slug), ({ id, patch }: { id: string; patch: PotUpdate }) =>
+    apiSend('PATCH', studioApi(slug, 'pots', id), patch, potSchema),
   );
 
 export const useDeletePot = (slug: string) =>

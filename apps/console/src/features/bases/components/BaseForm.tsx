@@ -10,7 +10,7 @@ import { WarningList } from '@vatside/ui/WarningList';
 import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { formatAmount } from '../../../lib/format.ts';
-import { useCreateBase } from '../api.ts';
+import { useCreateBase, useUpdateBase } from '../api.ts';
 import { fiberNames, weightClassNames } from './names.ts';
 
 const blank = () => ({
@@ -23,9 +23,31 @@ const blank = () => ({
   lot: '',
 });
 
-/** A yarn base: what it is made of and what one skein weighs; the server runs the fiber check. */
-export function BaseForm({ slug }: { slug: string }) {
+const valuesOf = (base: Base) => ({
+  name: base.name,
+  fiberContent: base.fiberContent,
+  superwash: base.superwash,
+  weightClass: base.weightClass,
+  skeinWeightG: base.skeinWeightG,
+  skeinLengthM: base.skeinLengthM,
+  lot: base.lot,
+});
+
+/**
+ * A yarn base: what it is made of and what one skein weighs; the server runs the fiber check.
+ * With `editing`, the same form changes that base in place (recipes keep pointing at it).
+ */
+export function BaseForm({
+  slug,
+  editing,
+  onDone,
+}: {
+  slug: string;
+  editing?: Base;
+  onDone?: () => void;
+}) {
   const create = useCreateBase(slug);
+  const update = useUpdateBase(slug);
   const [created, setCreated] = useState<Base>();
   const {
     register,
@@ -35,13 +57,21 @@ export function BaseForm({ slug }: { slug: string }) {
     reset,
     watch,
     formState: { errors, isSubmitting },
-  } = useForm({ resolver: formResolver(baseCreateSchema), defaultValues: blank() });
+  } = useForm({
+    resolver: formResolver(baseCreateSchema),
+    defaultValues: editing ? valuesOf(editing) : blank(),
+  });
   const fibers = useFieldArray({ control, name: 'fiberContent' });
   const lengthM = watch('skeinLengthM');
 
   const onSubmit = handleSubmit(async (base) => {
     setCreated(undefined);
     try {
+      if (editing) {
+        await update.mutateAsync({ id: editing.id, patch: base });
+        onDone?.();
+        return;
+      }
       setCreated(await create.mutateAsync(base));
       reset(blank());
     } catch (error) {
@@ -58,7 +88,12 @@ export function BaseForm({ slug }: { slug: string }) {
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} aria-label="Add a base" className="space-y-4">
+    <form
+      noValidate
+      onSubmit={onSubmit}
+      aria-label={editing ? `Change ${editing.name}` : 'Add a base'}
+      className="space-y-4"
+    >
       {errors.root?.server ? <FormAlert>{errors.root.server.message}</FormAlert> : null}
       {created ? (
         <div className="space-y-2">
@@ -168,9 +203,22 @@ export function BaseForm({ slug }: { slug: string }) {
           {...register('skeinLengthM', { valueAsNumber: true })}
         />
       </div>
-      <Button type="submit" disabled={isSubmitting}>
-        {isSubmitting ? 'Adding…' : 'Add base'}
-      </Button>
+      <div className="flex flex-wrap gap-3">
+        <Button type="submit" disabled={isSubmitting}>
+          {editing
+            ? isSubmitting
+              ? 'Saving…'
+              : 'Save changes'
+            : isSubmitting
+              ? 'Adding…'
+              : 'Add base'}
+        </Button>
+        {editing ? (
+          <Button variant="secondary" onClick={onDone} disabled={isSubmitting}>
+            Cancel
+          </Button>
+        ) : null}
+      </div>
     </form>
   );
 }

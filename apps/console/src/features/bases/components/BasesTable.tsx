@@ -6,6 +6,7 @@ import { WarningList } from '@vatside/ui/WarningList';
 import { useMemo } from 'react';
 import { DataTable } from '../../../components/DataTable.tsx';
 import { deleteColumn } from '../../../components/delete-column.tsx';
+import { editColumn } from '../../../components/edit-column.tsx';
 import { formatAmount } from '../../../lib/format.ts';
 import { useDeleteBase } from '../api.ts';
 import { fiberNames, weightClassNames } from './names.ts';
@@ -16,10 +17,13 @@ export function BasesTable({
   slug,
   bases,
   canEdit,
+  onEdit,
 }: {
   slug: string;
   bases: Base[];
   canEdit: boolean;
+  /** Opens a row in the form to change it. */
+  onEdit: (row: Base) => void;
 }) {
   const remove = useDeleteBase(slug);
   const { mutate } = remove;
@@ -83,9 +87,9 @@ export function BasesTable({
           </div>
         ),
       }),
-      ...(canEdit ? [deleteColumn<Base>(mutate)] : []),
+      ...(canEdit ? [editColumn<Base>(onEdit), deleteColumn<Base>(mutate)] : []),
     ],
-    [canEdit, mutate],
+    [canEdit, mutate, onEdit],
   );
   return (
     <div className="space-y-3">

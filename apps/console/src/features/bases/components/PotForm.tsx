@@ -1,4 +1,4 @@
-import { potCreateSchema, potMaterials } from '@vatside/contracts/workbench-bases';
+import { potCreateSchema, potMaterials, type Pot } from '@vatside/contracts/workbench-bases';
 import { convert } from '@vatside/dye-kit';
 import { ApiError } from '@vatside/ui/api-client.ts';
 import { Button } from '@vatside/ui/Button';
@@ -9,7 +9,7 @@ import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { useCreatePot } from '../api.ts';
+import { useCreatePot, useUpdatePot } from '../api.ts';
 import { capacityLabel } from './capacity.ts';
 import { potMaterialNames } from './names.ts';
 
@@ -19,8 +19,18 @@ const potFormSchema = potCreateSchema
   .extend({ capacityL: z.number().positive().max(200) });
 const blank = { name: '', capacityL: 8, material: 'stainlessSteel' as const };
 
-export function PotForm({ slug }: { slug: string }) {
+/** A pot on the stove; with `editing`, the same form changes that pot in place. */
+export function PotForm({
+  slug,
+  editing,
+  onDone,
+}: {
+  slug: string;
+  editing?: Pot;
+  onDone?: () => void;
+}) {
   const create = useCreatePot(slug);
+  const update = useUpdatePot(slug);
   const {
     register,
     handleSubmit,
@@ -28,13 +38,28 @@ export function PotForm({ slug }: { slug: string }) {
     reset,
     watch,
     formState: { errors, isSubmitting },
-  } = useForm({ resolver: formResolver(potFormSchema), defaultValues: blank });
+  } = useForm({
+    resolver: formResolver(potFormSchema),
+    defaultValues: editing
+      ? {
+          name: editing.name,
+          capacityL: convert(editing.capacityMl, 'mL', 'L'),
+          material: editing.material,
+        }
+      : blank,
+  });
   const capacityL = watch('capacityL');
   const material = watch('material');
 
   const onSubmit = handleSubmit(async ({ capacityL: liters, ...pot }) => {
+    const values = { ...pot, capacityMl: convert(liters, 'L', 'mL') };
     try {
-      await create.mutateAsync({ ...pot, capacityMl: convert(liters, 'L', 'mL') });
+      if (editing) {
+        await update.mutateAsync({ id: editing.id, patch: values });
+        onDone?.();
+        return;
+      }
+      await create.mutateAsync(values);
       reset(blank);
     } catch (error) {
       if (error instanceof ApiError && error.fields?.capacityMl) {
@@ -45,7 +70,12 @@ export function PotForm({ slug }: { slug: string }) {
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} aria-label="Add a pot" className="space-y-4">
+    <form
+      noValidate
+      onSubmit={onSubmit}
+      aria-label={editing ? `Change ${editing.name}` : 'Add a pot'}
+      className="space-y-4"
+    >
       {errors.root?.server ? <FormAlert>{errors.root.server.message}</FormAlert> : null}
       <div className="grid gap-4 sm:grid-cols-3">
         <TextField
@@ -82,9 +112,22 @@ export function PotForm({ slug }: { slug: string }) {
           is the usual choice.
         </FormAlert>
       ) : null}
-      <Button type="submit" disabled={isSubmitting}>
-        {isSubmitting ? 'Adding…' : 'Add pot'}
-      </Button>
+      <div className="flex flex-wrap gap-3">
+        <Button type="submit" disabled={isSubmitting}>
+          {editing
+            ? isSubmitting
+              ? 'Saving…'
+              : 'Save changes'
+            : isSubmitting
+              ? 'Adding…'
+              : 'Add pot'}
+        </Button>
+        {editing ? (
+          <Button variant="secondary" onClick={onDone} disabled={isSubmitting}>
+            Cancel
+          </Button>
+        ) : null}
+      </div>
     </form>
   );
 }

@@ -5,6 +5,7 @@ import { StatusPill } from '@vatside/ui/StatusPill';
 import { useMemo } from 'react';
 import { DataTable } from '../../../components/DataTable.tsx';
 import { deleteColumn } from '../../../components/delete-column.tsx';
+import { editColumn } from '../../../components/edit-column.tsx';
 import { useDeletePot } from '../api.ts';
 import { capacityLabel } from './capacity.ts';
 import { potMaterialNames } from './names.ts';
@@ -15,10 +16,13 @@ export function PotsTable({
   slug,
   pots,
   canEdit,
+  onEdit,
 }: {
   slug: string;
   pots: Pot[];
   canEdit: boolean;
+  /** Opens a row in the form to change it. */
+  onEdit: (row: Pot) => void;
 }) {
   const remove = useDeletePot(slug);
   const { mutate } = remove;
@@ -43,9 +47,9 @@ export function PotsTable({
           </span>
         ),
       }),
-      ...(canEdit ? [deleteColumn<Pot>(mutate)] : []),
+      ...(canEdit ? [editColumn<Pot>(onEdit), deleteColumn<Pot>(mutate)] : []),
     ],
-    [canEdit, mutate],
+    [canEdit, mutate, onEdit],
   );
   return (
     <div className="space-y-3">
