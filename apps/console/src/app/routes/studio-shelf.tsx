@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import type { Dye } from '@vatside/contracts/workbench-shelf';
 import { SafetyNote } from '@vatside/ui/SafetyNote';
 import { useState } from 'react';
 import { AddSection } from '../../components/AddSection.tsx';
@@ -22,6 +23,7 @@ export function Component() {
   const stocks = useQuery(stockSolutionsQueryOptions(slug, { ...firstPage, offset: stockOffset }));
   // The stock form offers every dye, not only the page on screen.
   const allDyes = useQuery({ ...dyesQueryOptions(slug, pickerPage), enabled: canEdit });
+  const [editingDye, setEditingDye] = useState<Dye>();
 
   return (
     <div className="space-y-6">
@@ -30,12 +32,21 @@ export function Component() {
         <QueryView query={dyes} loading="Reading the shelf…" failed="The dyes could not be loaded">
           {(list) => (
             <>
-              <DyesTable slug={slug} dyes={list.items} canEdit={canEdit} />
+              <DyesTable slug={slug} dyes={list.items} canEdit={canEdit} onEdit={setEditingDye} />
               <Pager page={list.page} noun="dyes" onOffset={setDyeOffset} />
             </>
           )}
         </QueryView>
-        {canEdit ? (
+        {canEdit && editingDye ? (
+          <AddSection title={`Change ${editingDye.name}`}>
+            <DyeForm
+              key={editingDye.id}
+              slug={slug}
+              editing={editingDye}
+              onDone={() => setEditingDye(undefined)}
+            />
+          </AddSection>
+        ) : canEdit ? (
           <AddSection title="Add a dye">
             <DyeForm slug={slug} />
           </AddSection>

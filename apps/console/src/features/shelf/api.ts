@@ -6,6 +6,7 @@ import {
   stockSolutionListSchema,
   stockSolutionSchema,
   type DyeCreate,
+  type DyeUpdate,
   type StockAdjustmentCreate,
   type StockSolutionCreate,
 } from '@vatside/contracts/workbench-shelf';
@@ -57,6 +58,11 @@ function useShelfMutation<V, R>(slug: string, send: (vars: V) => Promise<R>) {
 export const useCreateDye = (slug: string) =>
   useShelfMutation(slug, (dye: DyeCreate) =>
     apiSend('POST', studioApi(slug, 'dyes'), dye, dyeSchema),
+  );
+
+export const useUpdateDye = (slug: string) =>
+  useShelfMutation(slug, ({ id, patch }: { id: string; patch: DyeUpdate }) =>
+    apiSend('PATCH', studioApi(slug, 'dyes', id), patch, dyeSchema),
   );
 
 export const useDeleteDye = (slug: string) =>

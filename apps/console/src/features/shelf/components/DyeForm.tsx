@@ -1,4 +1,4 @@
-import { dyeCreateSchema, dyeKinds } from '@vatside/contracts/workbench-shelf';
+import { dyeCreateSchema, dyeKinds, type Dye } from '@vatside/contracts/workbench-shelf';
 import { COLORANTS } from '@vatside/dye-kit';
 import { Button } from '@vatside/ui/Button';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
@@ -7,14 +7,26 @@ import { SelectField } from '@vatside/ui/form/SelectField';
 import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
 import { useForm } from 'react-hook-form';
-import { useCreateDye } from '../api.ts';
+import { useCreateDye, useUpdateDye } from '../api.ts';
 import { dyeKindNames } from './kind-names.ts';
 
 const blank = { kind: 'liquidFoodColor' as const, name: '', colorantIds: [], swatchHex: '#2a6e80' };
 
-/** Put a dye on the shelf: what it is, what is in it, and the color it gives. */
-export function DyeForm({ slug }: { slug: string }) {
+/**
+ * Put a dye on the shelf: what it is, what is in it, and the color it gives. With `editing`, the
+ * same form changes that dye in place (its stock jars and recipes keep pointing at it).
+ */
+export function DyeForm({
+  slug,
+  editing,
+  onDone,
+}: {
+  slug: string;
+  editing?: Dye;
+  onDone?: () => void;
+}) {
   const create = useCreateDye(slug);
+  const update = useUpdateDye(slug);
   const {
     register,
     handleSubmit,
@@ -22,11 +34,26 @@ export function DyeForm({ slug }: { slug: string }) {
     reset,
     watch,
     formState: { errors, isSubmitting },
-  } = useForm({ resolver: formResolver(dyeCreateSchema), defaultValues: blank });
+  } = useForm({
+    resolver: formResolver(dyeCreateSchema),
+    defaultValues: editing
+      ? {
+          kind: editing.kind,
+          name: editing.name,
+          colorantIds: editing.colorantIds,
+          swatchHex: editing.swatchHex,
+        }
+      : blank,
+  });
   const hex = watch('swatchHex');
 
   const onSubmit = handleSubmit(async (dye) => {
     try {
+      if (editing) {
+        await update.mutateAsync({ id: editing.id, patch: dye });
+        onDone?.();
+        return;
+      }
       await create.mutateAsync(dye);
       reset(blank);
     } catch (error) {
@@ -35,7 +62,12 @@ export function DyeForm({ slug }: { slug: string }) {
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} aria-label="Add a dye" className="space-y-4">
+    <form
+      noValidate
+      onSubmit={onSubmit}
+      aria-label={editing ? `Change ${editing.name}` : 'Add a dye'}
+      className="space-y-4"
+    >
       {errors.root?.server ? <FormAlert>{errors.root.server.message}</FormAlert> : null}
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField
@@ -87,8 +119,19 @@ export function DyeForm({ slug }: { slug: string }) {
           {...register('swatchHex')}
         />
         <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? 'Adding…' : 'Add dye'}
+          {editing
+            ? isSubmitting
+              ? 'Saving…'
+              : 'Save changes'
+            : isSubmitting
+              ? 'Adding…'
+              : 'Add dye'}
         </Button>
+        {editing ? (
+          <Button variant="secondary" onClick={onDone} disabled={isSubmitting}>
+            Cancel
+          </Button>
+        ) : null}
       </div>
     </form>
   );

@@ -5,6 +5,7 @@ import { Swatch } from '@vatside/ui/Swatch';
 import { useMemo } from 'react';
 import { DataTable } from '../../../components/DataTable.tsx';
 import { deleteColumn } from '../../../components/delete-column.tsx';
+import { editColumn } from '../../../components/edit-column.tsx';
 import { useDeleteDye } from '../api.ts';
 import { dyeKindNames } from './kind-names.ts';
 
@@ -14,10 +15,13 @@ export function DyesTable({
   slug,
   dyes,
   canEdit,
+  onEdit,
 }: {
   slug: string;
   dyes: Dye[];
   canEdit: boolean;
+  /** Opens a row in the form to change it. */
+  onEdit: (row: Dye) => void;
 }) {
   const remove = useDeleteDye(slug);
   const { mutate } = remove;
@@ -45,9 +49,9 @@ export function DyesTable({
             </ul>
           ),
       }),
-      ...(canEdit ? [deleteColumn<Dye>(mutate)] : []),
+      ...(canEdit ? [editColumn<Dye>(onEdit), deleteColumn<Dye>(mutate)] : []),
     ],
-    [canEdit, mutate],
+    [canEdit, mutate, onEdit],
   );
   return (
     <div className="space-y-3">
