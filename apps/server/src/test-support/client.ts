@@ -4,7 +4,7 @@ import { uniqueRecipient, waitForMail } from './mail-catcher.ts';
 
 /** A request body already encoded once, e.g. a multipart form sent many times by a benchmark. */
 export interface EncodedBody {
-  bytes: Uint8Array;
+  bytes: Uint8Array<ArrayBuffer>;
   contentType: string;
 }
 
