@@ -5,9 +5,8 @@
 // (one clock: the load generator and the host are this process). Then every viewer drops and
 // comes back at once, and we time until all have their snapshot again. Prints the figures
 // beside the targets for 5,000 viewers. Uses the test profile's database and mail catcher.
-import { spawn, type ChildProcess } from 'node:child_process';
+import type { ChildProcess } from 'node:child_process';
 import { readFileSync } from 'node:fs';
-import { createServer } from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parseArgs } from 'node:util';
@@ -18,6 +17,7 @@ import { signUpVerified, type TestClient } from '../../apps/server/src/test-supp
 import { makeLiveSessions } from '../../apps/server/src/test-support/live-fixtures.ts';
 import type { RunningServer } from '../../apps/server/src/server.ts';
 import { Phone } from './phone.ts';
+import { startServerProcess } from './server-process.ts';
 
 const { values: args } = parseArgs({
   options: {
@@ -35,19 +35,7 @@ const targets = { p99Ms: 250, peakMemoryMb: 1024, reconnectS: 10 };
 const deliveryTimeoutMs = 15_000;
 const reconnectTimeoutMs = 60_000;
 
-const serverDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../apps/server');
 const say = (text: string) => console.log(`[bench:live] ${text}`);
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
-    });
-  });
-}
 
 /** The server's own figures from /proc: peak resident memory (VmHWM) and current (VmRSS). */
 function memoryMb(pid: number) {
@@ -62,38 +50,13 @@ function cpuSeconds(pid: number) {
   return (Number(fields[11]) + Number(fields[12])) / 100; // clock ticks; 100 per second on Linux
 }
 
-async function startServerProcess(): Promise<{ child: ChildProcess; url: string }> {
-  const port = await freePort();
-  const url = `http://127.0.0.1:${port}`;
-  const profileDir = path.resolve(serverDir, '../../.local/bench');
-  const profiling = args.profile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [];
-  const child = spawn(process.execPath, [...profiling, '--import', 'tsx', 'src/main.ts'], {
-    cwd: serverDir,
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      HOST: '127.0.0.1',
-      PORT: String(port),
-      PUBLIC_ORIGIN: url,
-      LOG_LEVEL: 'warn',
-      MAIL_WORKER_ENABLED: 'false',
-      AUTH_ATTEMPTS_PER_MINUTE: '1000',
-      APPS_DIR: '',
-      REDIS_URL: '',
-    },
-    stdio: ['ignore', 'inherit', 'inherit'],
-  });
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`the server exited (${child.exitCode})`);
-    const up = await fetch(`${url}/api/health`).then(
-      (r) => r.ok,
-      () => false,
-    );
-    if (up) return { child, url };
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('the server did not answer /api/health within 60 s');
+/** The server as `npm start` runs it, with a CPU profile when asked (`--profile`). */
+function startServer(): Promise<{ child: ChildProcess; url: string }> {
+  const profileDir = path.resolve(fileURLToPath(import.meta.url), '../../../.local/bench');
+  return startServerProcess(
+    { NODE_ENV: 'test', AUTH_ATTEMPTS_PER_MINUTE: '1000', APPS_DIR: '' },
+    args.profile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [],
+  );
 }
 
 /** The server fixtures need only the URL and the origin of a RunningServer. */
@@ -122,7 +85,7 @@ const percentile = (sorted: number[], p: number) =>
 
 async function main() {
   say(`${viewerCount} viewers, ${stepCount} steps, connecting ${batchSize} at a time`);
-  const { child, url } = await startServerProcess();
+  const { child, url } = await startServer();
   const pid = child.pid!;
   let peakPolledMb = 0;
   const poll = setInterval(() => {

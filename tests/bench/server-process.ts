@@ -19,13 +19,17 @@ function freePort(): Promise<number> {
   });
 }
 
-/** Starts the server with the caller's environment plus `env`; resolves once /api/health answers. */
+/**
+ * Starts the server with the caller's environment plus `env`, and `nodeFlags` for Node itself
+ * (e.g. a CPU profile); resolves once /api/health answers.
+ */
 export async function startServerProcess(
   env: Record<string, string>,
+  nodeFlags: string[] = [],
 ): Promise<{ child: ChildProcess; url: string }> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const child = spawn('bash', ['serve.sh'], {
+  const child = spawn('bash', ['serve.sh', ...nodeFlags], {
     cwd: serverDir,
     env: {
       ...process.env,
