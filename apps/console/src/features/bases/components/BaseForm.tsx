@@ -9,6 +9,7 @@ import { TextField } from '@vatside/ui/form/TextField';
 import { WarningList } from '@vatside/ui/WarningList';
 import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
+import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
 import { formatAmount } from '../../../lib/format.ts';
 import { useCreateBase, useUpdateBase } from '../api.ts';
 import { fiberNames, weightClassNames } from './names.ts';
@@ -203,22 +204,12 @@ export function BaseForm({
           {...register('skeinLengthM', { valueAsNumber: true })}
         />
       </div>
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" disabled={isSubmitting}>
-          {editing
-            ? isSubmitting
-              ? 'Saving…'
-              : 'Save changes'
-            : isSubmitting
-              ? 'Adding…'
-              : 'Add base'}
-        </Button>
-        {editing ? (
-          <Button variant="secondary" onClick={onDone} disabled={isSubmitting}>
-            Cancel
-          </Button>
-        ) : null}
-      </div>
+      <AddOrSaveButtons
+        addLabel="Add base"
+        changing={editing !== undefined}
+        submitting={isSubmitting}
+        onCancel={onDone}
+      />
     </form>
   );
 }

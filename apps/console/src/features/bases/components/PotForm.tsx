@@ -1,12 +1,12 @@
 import { potCreateSchema, potMaterials, type Pot } from '@vatside/contracts/workbench-bases';
 import { convert } from '@vatside/dye-kit';
 import { ApiError } from '@vatside/ui/api-client.ts';
-import { Button } from '@vatside/ui/Button';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { formResolver } from '@vatside/ui/form/form-resolver.ts';
 import { SelectField } from '@vatside/ui/form/SelectField';
 import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
+import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { useCreatePot, useUpdatePot } from '../api.ts';
@@ -112,22 +112,12 @@ export function PotForm({
           is the usual choice.
         </FormAlert>
       ) : null}
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" disabled={isSubmitting}>
-          {editing
-            ? isSubmitting
-              ? 'Saving…'
-              : 'Save changes'
-            : isSubmitting
-              ? 'Adding…'
-              : 'Add pot'}
-        </Button>
-        {editing ? (
-          <Button variant="secondary" onClick={onDone} disabled={isSubmitting}>
-            Cancel
-          </Button>
-        ) : null}
-      </div>
+      <AddOrSaveButtons
+        addLabel="Add pot"
+        changing={editing !== undefined}
+        submitting={isSubmitting}
+        onCancel={onDone}
+      />
     </form>
   );
 }

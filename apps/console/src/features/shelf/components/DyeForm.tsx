@@ -1,11 +1,11 @@
 import { dyeCreateSchema, dyeKinds, type Dye } from '@vatside/contracts/workbench-shelf';
 import { COLORANTS } from '@vatside/dye-kit';
-import { Button } from '@vatside/ui/Button';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { formResolver } from '@vatside/ui/form/form-resolver.ts';
 import { SelectField } from '@vatside/ui/form/SelectField';
 import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
+import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
 import { useForm } from 'react-hook-form';
 import { useCreateDye, useUpdateDye } from '../api.ts';
 import { dyeKindNames } from './kind-names.ts';
@@ -118,20 +118,12 @@ export function DyeForm({
           error={errors.swatchHex?.message}
           {...register('swatchHex')}
         />
-        <Button type="submit" disabled={isSubmitting}>
-          {editing
-            ? isSubmitting
-              ? 'Saving…'
-              : 'Save changes'
-            : isSubmitting
-              ? 'Adding…'
-              : 'Add dye'}
-        </Button>
-        {editing ? (
-          <Button variant="secondary" onClick={onDone} disabled={isSubmitting}>
-            Cancel
-          </Button>
-        ) : null}
+        <AddOrSaveButtons
+          addLabel="Add dye"
+          changing={editing !== undefined}
+          submitting={isSubmitting}
+          onCancel={onDone}
+        />
       </div>
     </form>
   );
