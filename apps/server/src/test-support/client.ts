@@ -29,16 +29,23 @@ export class TestClient {
     return [...this.cookies.keys()].some((k) => k.includes('session_token'));
   }
 
-  async request(method: string, path: string, body?: unknown): Promise<Response> {
+  /** The headers a request from this person carries: origin, cookies and the body's type. */
+  headersFor(body?: unknown): Record<string, string> {
     const headers: Record<string, string> = { origin: this.server.deps.config.PUBLIC_ORIGIN };
     if (this.cookies.size > 0)
       headers.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
     // FormData (uploads) sets its own multipart content type, an encoded body carries its own;
     // anything else goes as JSON.
+    if (isEncoded(body)) headers['content-type'] = body.contentType;
+    else if (body !== undefined && !(body instanceof FormData))
+      headers['content-type'] = 'application/json';
+    return headers;
+  }
+
+  async request(method: string, path: string, body?: unknown): Promise<Response> {
+    const headers = this.headersFor(body);
     const form = body instanceof FormData;
     const encoded = isEncoded(body);
-    if (encoded) headers['content-type'] = body.contentType;
-    else if (body !== undefined && !form) headers['content-type'] = 'application/json';
     const res = await fetch(`${this.server.url}${path}`, {
       method,
       headers,

@@ -15,6 +15,12 @@ export const THUMB_MAX_PX = 400;
 /** The palette is found on a small copy: plenty of pixels for k-means, quick to decode. */
 const PALETTE_MAX_PX = 256;
 const OUTPUT_TYPE = 'image/jpeg';
+/**
+ * Every resize here is a reduction: a triangle filter (antialiased, its support scaled by the
+ * reduction) costs about a quarter less than the default Lanczos-3 on a 12-megapixel photo
+ * (measured), and at web and thumbnail size the difference in sharpness does not show.
+ */
+const REDUCE = 'linear';
 
 export interface Rendition {
   data: Buffer;
@@ -145,10 +151,17 @@ const fromDecoded = ({ pixels, raw }: Decoded) => sharp(pixels, { raw });
  */
 async function encode(input: Sharp, maxPx: number): Promise<Rendition> {
   const { data, info } = await input
-    .resize({ width: maxPx, height: maxPx, fit: 'inside', withoutEnlargement: true })
-    // Plain libjpeg with optimized Huffman tables: mozjpeg's trellis search cost more time per
-    // photo than the few percent of bytes it saved.
-    .jpeg({ quality: 82, optimiseCoding: true })
+    .resize({
+      width: maxPx,
+      height: maxPx,
+      fit: 'inside',
+      withoutEnlargement: true,
+      kernel: REDUCE,
+    })
+    // Plain libjpeg with its standard Huffman tables: the optimized-table pass doubled the encode
+    // time of a 1600-px photo (10–15 ms → 22–34 ms, measured) to save 6 % of its bytes, and
+    // mozjpeg's trellis search cost more still.
+    .jpeg({ quality: 82, optimiseCoding: false })
     .toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height, contentType: OUTPUT_TYPE };
 }
@@ -163,7 +176,13 @@ async function encode(input: Sharp, maxPx: number): Promise<Rendition> {
 async function decode(bytes: Uint8Array, header: Metadata, maxPixels: number): Promise<Decoded> {
   let picture = sharp(bytes, { limitInputPixels: maxPixels, failOn: 'error', sequentialRead: true })
     .rotate()
-    .resize({ width: WEB_MAX_PX, height: WEB_MAX_PX, fit: 'inside', withoutEnlargement: true });
+    .resize({
+      width: WEB_MAX_PX,
+      height: WEB_MAX_PX,
+      fit: 'inside',
+      withoutEnlargement: true,
+      kernel: REDUCE,
+    });
   if (header.hasAlpha) picture = picture.flatten({ background: '#ffffff' });
   if (header.space !== 'srgb' || header.channels !== 3) picture = picture.toColourspace('srgb');
   const { data, info } = await picture.raw().toBuffer({ resolveWithObject: true });
