@@ -4,8 +4,9 @@ import { defineConfig } from 'vitest/config';
 
 const apiOrigin = process.env.VATSIDE_API_ORIGIN ?? 'http://127.0.0.1:4400';
 
-// The server hosts this build at / on the same origin as the API.
-export default defineConfig({
+// The server hosts this build at / on the same origin as the API. `vite build --ssr` builds
+// src/entry-server.tsx into dist-server/: the server writes landing pages' first HTML with it.
+export default defineConfig(({ isSsrBuild }) => ({
   base: '/',
   plugins: [react(), tailwindcss()],
   server: {
@@ -16,7 +17,12 @@ export default defineConfig({
     },
   },
   // The manifest's import graph is what the first-screen JS budget test and bench:viewer read.
-  build: { outDir: 'dist', manifest: true },
+  build: isSsrBuild
+    ? { outDir: 'dist-server', copyPublicDir: false }
+    : { outDir: 'dist', manifest: true },
+  // Our own packages are TypeScript sources: bundled in, while React and the rest load from
+  // node_modules.
+  ssr: { noExternal: [/^@vatside\//] },
   test: {
     name: 'viewer',
     environment: 'jsdom',
@@ -24,4 +30,4 @@ export default defineConfig({
     testTimeout: 30_000,
     setupFiles: ['./src/testing/setup.ts'],
   },
-});
+}));

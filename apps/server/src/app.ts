@@ -92,7 +92,7 @@ export function createApp(deps: AppDeps): Express {
   );
   for (const router of apiRouters) app.use('/api', router(deps));
   app.use('/api', apiNotFound);
-  if (config.APPS_DIR) serveApps(app, config.APPS_DIR);
+  if (config.APPS_DIR) serveApps(app, config.APPS_DIR, logger);
   app.use(errorMiddleware);
   return app;
 }

@@ -46,6 +46,17 @@ export function apiSend<T = undefined>(
   return request(path, init, schema);
 }
 
+/**
+ * How a request leaves: the browser's fetch, or, while the server writes a page's first HTML,
+ * one that sends it to the API on the asker's behalf (their cookie, the server's own address).
+ */
+let transport: (path: string, init: RequestInit) => Promise<Response> = (path, init) =>
+  fetch(path, init);
+
+export function setApiTransport(next: typeof transport) {
+  transport = next;
+}
+
 async function request<T>(
   path: string,
   init: RequestInit,
@@ -54,7 +65,7 @@ async function request<T>(
 ): Promise<T> {
   let response: Response;
   try {
-    response = await fetch(path, {
+    response = await transport(path, {
       ...init,
       credentials: 'include',
       headers: { Accept: 'application/json', ...init.headers },

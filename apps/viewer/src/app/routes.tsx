@@ -4,6 +4,17 @@ import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { AppShell } from './shell.tsx';
 import { RouteError } from './route-error.tsx';
 
+/**
+ * What the server may write a route's first HTML for: the pages a phone lands on from a link,
+ * which read only public data and the asker's session. Screens that live on the phone (the
+ * follow-along, forms, sign-in) start in the browser.
+ */
+export interface ViewerRouteHandle {
+  firstHtml?: { status: 200 | 404 };
+}
+
+const firstHtml = (status: 200 | 404 = 200): ViewerRouteHandle => ({ firstHtml: { status } });
+
 /** The viewer's route tree as data. Route modules load lazily and export `Component`. */
 export const routes: RouteObject[] = [
   {
@@ -16,12 +27,13 @@ export const routes: RouteObject[] = [
         // Keeps the shell around a failing screen.
         errorElement: <RouteError />,
         children: [
-          { index: true, lazy: () => import('./routes/welcome.tsx') },
+          { index: true, handle: firstHtml(), lazy: () => import('./routes/welcome.tsx') },
           ...accountRoutes,
-          { path: 's/:slug', lazy: () => import('./routes/studio-page.tsx') },
+          { path: 's/:slug', handle: firstHtml(), lazy: () => import('./routes/studio-page.tsx') },
           { path: 's/:slug/live', lazy: () => import('./routes/studio-live.tsx') },
           {
             path: 's/:slug/dye-alongs/:dyeAlongId',
+            handle: firstHtml(),
             lazy: () => import('./routes/studio-dye-along.tsx'),
           },
           {
@@ -31,14 +43,16 @@ export const routes: RouteObject[] = [
           { path: 's/:slug/my-skeins', lazy: () => import('./routes/my-skeins.tsx') },
           {
             path: 's/:slug/dye-alongs/:dyeAlongId/gallery',
+            handle: firstHtml(),
             lazy: () => import('./routes/studio-gallery.tsx'),
           },
           {
             path: 's/:slug/dye-alongs/:dyeAlongId/gallery/:skeinId',
+            handle: firstHtml(),
             lazy: () => import('./routes/studio-gallery-skein.tsx'),
           },
           { path: 'unsubscribe', lazy: () => import('./routes/unsubscribe.tsx') },
-          { path: '*', lazy: () => import('./routes/not-found.tsx') },
+          { path: '*', handle: firstHtml(404), lazy: () => import('./routes/not-found.tsx') },
         ],
       },
     ],

@@ -53,11 +53,17 @@ function parse<T>(raw: string | null, schema: Parser<T>): T | null {
 }
 
 /**
- * A value remembered on this device (null until set); anything stored that no longer matches
+ * A value remembered on this device (null until set, and in a page's first HTML); anything stored that no longer matches
  * `schema` counts as unset. Pass a schema defined once, outside the component.
  */
 export function useStoredState<T>(key: string, schema: Parser<T>) {
-  const raw = useSyncExternalStore(subscribe, () => read(key));
+  // The server's first HTML knows nothing stored on the phone: it and the render that takes it
+  // over read "unset", and the stored value follows at once.
+  const raw = useSyncExternalStore(
+    subscribe,
+    () => read(key),
+    () => null,
+  );
   const value = useMemo(() => parse(raw, schema), [raw, schema]);
   const setValue = useCallback(
     (next: T | null) => {

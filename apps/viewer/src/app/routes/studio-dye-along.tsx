@@ -20,9 +20,10 @@ export function Component() {
       <DyeAlongPage
         slug={slug}
         dyeAlongId={dyeAlongId}
-        sharing={(dyeAlong) => (
+        sharing={(dyeAlong, timeZone) => (
           <ShareSkeinLink
             dyeAlong={dyeAlong}
+            timeZone={timeZone}
             member={studio !== undefined && studio.myRole !== 'visitor'}
           />
         )}

@@ -3,12 +3,17 @@ import { sharingWindow } from '@vatside/contracts/sharing-window';
 
 // The server's sharing rule, said on the reader's own clock.
 
-const when = (iso: string) =>
-  new Intl.DateTimeFormat('en-US', { dateStyle: 'full', timeStyle: 'short' }).format(new Date(iso));
-
 export type ShareWindowView = { open: boolean; words: string };
 
-export function shareWindowOf(dyeAlong: PublicDyeAlong, now = new Date()): ShareWindowView {
+/** `timeZone` is the reader's; without it, the device's. */
+export function shareWindowOf(
+  dyeAlong: PublicDyeAlong,
+  { timeZone, now = new Date() }: { timeZone?: string; now?: Date } = {},
+): ShareWindowView {
+  const when = (iso: string) =>
+    new Intl.DateTimeFormat('en-US', { dateStyle: 'full', timeStyle: 'short', timeZone }).format(
+      new Date(iso),
+    );
   const window = sharingWindow(
     {
       status: dyeAlong.status,

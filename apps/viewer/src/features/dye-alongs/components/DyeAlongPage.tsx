@@ -25,7 +25,7 @@ const statusWords = {
 
 /**
  * A dye-along as its viewers read it: when, what it looks like, what to get and do. `sharing`
- * puts another feature's word on sharing skeins right under the start time.
+ * puts another feature's word on sharing skeins right under the start time, on the reader's clock.
  */
 export function DyeAlongPage({
   slug,
@@ -34,7 +34,7 @@ export function DyeAlongPage({
 }: {
   slug: string;
   dyeAlongId: string;
-  sharing?: (dyeAlong: PublicDyeAlong) => ReactNode;
+  sharing?: (dyeAlong: PublicDyeAlong, timeZone: string) => ReactNode;
 }) {
   const { reader, ready, signedIn, change, saveError } = useReader();
   const page = useQuery({
@@ -72,7 +72,7 @@ export function DyeAlongPage({
         {status ? <p className="text-lg font-bold">{status}</p> : null}
       </header>
       <StartTime dyeAlong={dyeAlong} timeZone={reader.timeZone} />
-      {sharing?.(dyeAlong)}
+      {sharing?.(dyeAlong, reader.timeZone)}
       <nav aria-label="On this page" className="flex flex-wrap gap-x-6">
         <a href="#supplies-title" className={textLinkClass}>
           What to get

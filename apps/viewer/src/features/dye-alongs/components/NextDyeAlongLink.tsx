@@ -2,19 +2,20 @@ import { useQuery } from '@tanstack/react-query';
 import { viewerPaths } from '@vatside/contracts/dye-alongs';
 import { buttonClass } from '@vatside/ui/Button';
 import { Card } from '@vatside/ui/Card';
-import { deviceTimeZone } from '@vatside/ui/account/time-zones.ts';
 import { useMe } from '@vatside/ui/session.ts';
 import { Link } from 'react-router-dom';
+import { useDeviceTimeZone } from '../../../hooks/use-device-time-zone.ts';
 import { announcedDyeAlongsQueryOptions } from '../api.ts';
 import { clockOf } from '../zoned.ts';
 
 /** On a studio's page: its next announced dye-along, on the reader's clock. Nothing otherwise. */
 export function NextDyeAlongLink({ slug }: { slug: string }) {
   const { data: me } = useMe();
+  const deviceZone = useDeviceTimeZone();
   const { data } = useQuery(announcedDyeAlongsQueryOptions(slug));
   const next = data?.items.find((d) => Date.parse(d.startsAt) > Date.now()) ?? data?.items[0];
   if (!next) return null;
-  const when = clockOf(next.startsAt, me?.profile.timeZone ?? deviceTimeZone());
+  const when = clockOf(next.startsAt, me?.profile.timeZone ?? deviceZone);
   return (
     <Card as="section" aria-labelledby="next-dye-along" className="space-y-3">
       <p className="font-bold text-vat-800">Next dye-along</p>

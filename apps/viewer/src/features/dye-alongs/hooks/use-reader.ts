@@ -1,7 +1,7 @@
 import type { MeasureSystem } from '@vatside/dye-kit';
-import { deviceTimeZone } from '@vatside/ui/account/time-zones.ts';
 import { useUpdateProfile } from '@vatside/ui/account/profile-api.ts';
 import { useMe } from '@vatside/ui/session.ts';
+import { useDeviceTimeZone } from '../../../hooks/use-device-time-zone.ts';
 import { useStoredState } from '../../../hooks/use-stored-state.ts';
 import { fallbackKit, kitSchema, kitStorageKey } from '../../../lib/kit.ts';
 import type { Reader } from '../api.ts';
@@ -19,6 +19,7 @@ export function useReader() {
   const updateProfile = useUpdateProfile();
   const [storedKit, setKit] = useStoredState(kitStorageKey, kitSchema);
   const kit = storedKit ?? fallbackKit;
+  const deviceZone = useDeviceTimeZone();
 
   const profile = me?.profile;
   // While the profile saves, show what was asked for rather than the old value.
@@ -32,7 +33,7 @@ export function useReader() {
     : {
         weightOfGoodsG: pageWeightG(kit.skeinWeightG),
         system: kit.system,
-        timeZone: deviceTimeZone(),
+        timeZone: deviceZone,
       };
 
   const change = (next: { weightOfGoodsG?: number; system?: MeasureSystem }) => {

@@ -8,13 +8,16 @@ import { shareWindowOf } from '../window.ts';
 /** On a dye-along's page: the way to share a skein while sharing is open, else when it opens. */
 export function ShareSkeinLink({
   dyeAlong,
+  timeZone,
   member,
 }: {
   dyeAlong: PublicDyeAlong;
+  /** The reader's, as on the rest of the page. */
+  timeZone: string;
   /** Signed in and following: My skeins is theirs to open. */
   member: boolean;
 }) {
-  const sharing = shareWindowOf(dyeAlong);
+  const sharing = shareWindowOf(dyeAlong, { timeZone });
   const slug = dyeAlong.studio.slug;
   return (
     <Card as="section" aria-label="Share your skein" className="space-y-3">
