@@ -105,7 +105,9 @@ describe('in Chromium', () => {
       (window as unknown as { __seen: typeof seen }).__seen = seen;
       new MutationObserver((records) => {
         for (const r of records)
-          for (const node of r.removedNodes) if (node.nodeType === 1) seen.removed++;
+          r.removedNodes.forEach((node) => {
+            if (node.nodeType === 1) seen.removed++;
+          });
       }).observe(document, { childList: true, subtree: true });
     });
     const problems = watchPage(page);
