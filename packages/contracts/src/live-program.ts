@@ -52,18 +52,6 @@ export type LiveProgram = z.infer<typeof liveProgramSchema>;
 export const liveSessionStartSchema = z.object({ mode: z.enum(['live', 'rehearsal']) });
 export const liveSessionStartedSchema = z.object({ sessionId: z.string(), viewerPath: z.string() });
 
-/** GET /api/studios/:slug/live: the studio's running public session, if any. */
-export const currentLiveSchema = z.object({
-  live: z
-    .object({
-      sessionId: z.string(),
-      dyeAlongId: z.string(),
-      title: z.string(),
-      startedAt: z.string(),
-    })
-    .nullable(),
-});
-
 /** Socket: join a session's room; the answer is the whole state right now (a snapshot, not a diff). */
 export const liveJoinSchema = z.object({ sessionId: z.string().uuid() });
 export const liveJoinedSchema = z.object({

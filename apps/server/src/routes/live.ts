@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { currentLiveSchema, liveSessionStartSchema } from '@vatside/contracts/live-program';
+import { currentLiveSchema } from '@vatside/contracts/live-now';
+import { liveSessionStartSchema } from '@vatside/contracts/live-program';
 import { authorizeStudio, requireUser, studioStanding } from '../auth/authorize.ts';
 import type { AppDeps } from '../deps.ts';
 import { HttpError } from '../http/errors.ts';

@@ -2,11 +2,8 @@ import { queryOptions, skipToken, useMutation, useQueryClient } from '@tanstack/
 import { dyeAlongListSchema, type DyeAlong } from '@vatside/contracts/dye-alongs';
 import { sessionDyeLogSchema } from '@vatside/contracts/dye-log';
 import type { LiveState } from '@vatside/contracts/live';
-import {
-  currentLiveSchema,
-  liveProgramSchema,
-  liveSessionStartedSchema,
-} from '@vatside/contracts/live-program';
+import { currentLiveSchema } from '@vatside/contracts/live-now';
+import { liveProgramSchema, liveSessionStartedSchema } from '@vatside/contracts/live-program';
 import type { QuestionQueue } from '@vatside/contracts/questions';
 import { apiGet, apiSend } from '@vatside/ui/api-client.ts';
 import { studioApi } from '../../lib/studio-path.ts';

@@ -3,7 +3,7 @@ import { ErrorPanel } from '@vatside/ui/ErrorPanel';
 import { textLinkClass } from '@vatside/ui/link-class.ts';
 import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { Link, Navigate, useParams } from 'react-router-dom';
-import { studioLiveQueryOptions } from '../../features/live/api.ts';
+import { studioLiveQueryOptions } from '../../features/live/live-now-api.ts';
 
 /** /s/:slug/live: straight to the studio's running session, or a kind word when there is none. */
 export function Component() {

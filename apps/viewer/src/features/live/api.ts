@@ -1,20 +1,8 @@
 import { queryOptions, skipToken } from '@tanstack/react-query';
 import type { LiveState } from '@vatside/contracts/live';
-import { currentLiveSchema, liveProgramSchema } from '@vatside/contracts/live-program';
+import { liveProgramSchema } from '@vatside/contracts/live-program';
 import type { QuestionQueue } from '@vatside/contracts/questions';
 import { apiGet } from '@vatside/ui/api-client.ts';
-
-/** How often a studio page or the waiting screen asks whether a session has started. */
-export const liveCheckEveryMs = 20_000;
-
-/** The studio's running public session, or `{ live: null }`. */
-export const studioLiveQueryOptions = (slug: string) =>
-  queryOptions({
-    queryKey: ['live', 'studio', slug],
-    queryFn: ({ signal }) =>
-      apiGet(`/api/studios/${encodeURIComponent(slug)}/live`, currentLiveSchema, { signal }),
-    refetchInterval: liveCheckEveryMs,
-  });
 
 /** The run sheets of a session: fixed when it starts, so fetched once. */
 export const liveProgramQueryOptions = (sessionId: string) =>

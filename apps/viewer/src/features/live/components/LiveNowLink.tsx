@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { buttonClass } from '@vatside/ui/Button';
 import { Link } from 'react-router-dom';
-import { studioLiveQueryOptions } from '../api.ts';
+import { studioLiveQueryOptions } from '../live-now-api.ts';
 
 /** On a studio's page while a session runs: the way onto the stove. Nothing otherwise. */
 export function LiveNowLink({ slug }: { slug: string }) {
