@@ -64,12 +64,13 @@ interface Load {
   wireJsBytes: number;
 }
 
-async function coldLoad(browser: Browser, url: string): Promise<Load> {
+async function coldLoad(browser: Browser, url: string, cookie?: string): Promise<Load> {
   const context = await browser.newContext({
     viewport: phone,
     isMobile: true,
     hasTouch: true,
     deviceScaleFactor: 2,
+    ...(cookie ? { extraHTTPHeaders: { cookie } } : {}),
   });
   try {
     const page = await context.newPage();
@@ -155,12 +156,13 @@ async function signInHost(origin: string): Promise<string> {
 
 /**
  * The viewer URL of each measured route in the seeded demo. The follow-along needs a running
- * session: without one, the demo host starts one on the month (and `end` ends it again).
+ * session, and a public one can start only two hours before the month's start: without one, the
+ * demo host starts a rehearsal, the follow-along is loaded as the host, and `end` ends it again.
  */
 async function routeUrls(origin: string) {
   const api = async <T>(path: string, init?: RequestInit): Promise<T> => {
     const res = await fetch(`${origin}${path}`, init);
-    if (!res.ok) throw new Error(`${path}: ${res.status}; is the demo seeded?`);
+    if (!res.ok) throw new Error(`${path}: ${res.status} ${await res.text()}`);
     return (await res.json()) as T;
   };
   const months = await api<{ items: { id: string; title: string }[] }>(
@@ -168,39 +170,36 @@ async function routeUrls(origin: string) {
   );
   const month = months.items.find((m) => m.title === demoMonth);
   if (!month) throw new Error(`no announced "${demoMonth}" month in the demo studio`);
-  let { live } = await api<{ live: { sessionId: string } | null }>(
+  const { live } = await api<{ live: { sessionId: string } | null }>(
     `/api/studios/${demoSlug}/live`,
   );
-  let end = async () => undefined;
-  if (!live) {
-    const cookie = await signInHost(origin);
-    const started = await api<{ sessionId: string }>(
-      `/api/studios/${demoSlug}/dye-alongs/${month.id}/live-sessions`,
-      {
-        method: 'POST',
-        headers: { origin, cookie, 'content-type': 'application/json' },
-        body: JSON.stringify({ mode: 'live' }),
-      },
-    );
-    live = started;
-    say('started a live session on the demo month for the follow-along (ended after)');
-    end = async () => {
-      const phone = new Phone({ url: origin, cookie });
-      await phone.connect();
-      await phone.emitWithAck('live:action', {
-        sessionId: started.sessionId,
-        action: { type: 'session:end' },
-      });
-      await phone.close();
-    };
-  }
-  const urls = new Map<string, string>([
-    ['welcome', '/'],
-    ['studio page', `/s/${demoSlug}`],
-    ['dye-along page', `/s/${demoSlug}/dye-alongs/${month.id}`],
-    ['live follow-along', `/live/${live.sessionId}`],
+  const routes = new Map<string, { path: string; cookie?: string }>([
+    ['welcome', { path: '/' }],
+    ['studio page', { path: `/s/${demoSlug}` }],
+    ['dye-along page', { path: `/s/${demoSlug}/dye-alongs/${month.id}` }],
   ]);
-  return { urls, end };
+  if (live) {
+    routes.set('live follow-along', { path: `/live/${live.sessionId}` });
+    return { routes, end: async () => undefined };
+  }
+  const cookie = await signInHost(origin);
+  const { sessionId } = await api<{ sessionId: string }>(
+    `/api/studios/${demoSlug}/dye-alongs/${month.id}/live-sessions`,
+    {
+      method: 'POST',
+      headers: { origin, cookie, 'content-type': 'application/json' },
+      body: JSON.stringify({ mode: 'rehearsal' }),
+    },
+  );
+  say('the follow-along is measured on a rehearsal, as the demo host (ended after)');
+  routes.set('live follow-along', { path: `/live/${sessionId}`, cookie });
+  const end = async () => {
+    const phone = new Phone({ url: origin, cookie });
+    await phone.connect();
+    await phone.emitWithAck('live:action', { sessionId, action: { type: 'session:end' } });
+    await phone.close();
+  };
+  return { routes, end };
 }
 
 async function main() {
@@ -219,12 +218,12 @@ async function main() {
       `first-screen JS budget ${kb(FIRST_SCREEN_JS_BUDGET_BYTES)} gzip; LCP target < ${targetLcpMs / 1000} s`,
     );
     let missed = false;
-    const { urls, end } = await routeUrls(url);
-    for (const [name, path] of urls) {
+    const { routes, end } = await routeUrls(url);
+    for (const [name, { path, cookie }] of routes) {
       const route = viewerLandingRoutes.find((r) => r.name === name)!;
       const js = routeJs(manifest, route);
       const loads: Load[] = [];
-      for (let i = 0; i < runs; i++) loads.push(await coldLoad(browser, `${url}${path}`));
+      for (let i = 0; i < runs; i++) loads.push(await coldLoad(browser, `${url}${path}`, cookie));
       const fcp = median(loads.map((l) => l.fcpMs));
       const lcp = median(loads.map((l) => l.lcpMs));
       const wire = median(loads.map((l) => l.wireJsBytes));

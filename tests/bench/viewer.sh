@@ -1,12 +1,13 @@
 #!/usr/bin/env bash
 # pnpm bench:viewer [--runs N]: the viewer's phone benchmark. Builds the apps, seeds the invented
-# demo studio into a database of its own (never the demo's or the tests'), starts the object
-# store and mail catcher if they are not running (stopped again after), then measures each route.
+# demo studio into a fresh database of its own (never the demo's or the tests'; fresh, so its
+# images are in the object store this run uses), starts the object store and mail catcher if they
+# are not running (stopped again after), then measures each route.
 export VATSIDE_PROFILE=test
 export PG_DATABASE="${PG_DATABASE:-vatside_viewer_bench}"
 source "$(dirname "${BASH_SOURCE[0]}")/../../infra-local/env.sh"
 [ -x /usr/bin/chromium ] || apt_install chromium
-bash "$VATSIDE_ROOT/infra-local/postgres.sh" start
+bash "$VATSIDE_ROOT/infra-local/postgres.sh" reset-db
 pids=()
 trap 'for p in "${pids[@]}"; do kill "$p" 2>/dev/null; done' EXIT
 if ! port_in_use "$S3_PORT"; then

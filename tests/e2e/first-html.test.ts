@@ -127,4 +127,24 @@ describe('in Chromium', () => {
     ).resolves.toBe(1);
     await context.close();
   });
+
+  it("writes the follow-along's run sheets, and the socket brings the live state after", async () => {
+    const { sessionId } = await created<{ sessionId: string }>(
+      await host.call('POST', `/api/studios/${slug}/dye-alongs/${month.dyeAlongId}/live-sessions`, {
+        mode: 'live',
+      }),
+    );
+    const html = await (await fetch(`${appOrigin}/live/${sessionId}`)).text();
+    expect(rootOf(html)).toContain('Pool Teal');
+    expect(rootOf(html)).toContain('Kelp Shade');
+
+    const context = await newContext(browser, 'phone');
+    const page = await context.newPage();
+    const problems = watchPage(page);
+    await page.goto(`${appOrigin}/live/${sessionId}`);
+    await page.getByText('Connected', { exact: true }).waitFor();
+    await expect(page.getByRole('heading', { name: 'Pool Teal' }).isVisible()).resolves.toBe(true);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
 });

@@ -6,8 +6,9 @@ import { RouteError } from './route-error.tsx';
 
 /**
  * What the server may write a route's first HTML for: the pages a phone lands on from a link,
- * which read only public data and the asker's session. Screens that live on the phone (the
- * follow-along, forms, sign-in) start in the browser.
+ * which read only the API and the asker's session. The follow-along's first HTML is its run
+ * sheets; the live state follows over the socket once the scripts run. Forms and sign-in start
+ * in the browser.
  */
 export interface ViewerRouteHandle {
   firstHtml?: { status: 200 | 404 };
@@ -60,6 +61,7 @@ export const routes: RouteObject[] = [
   {
     // The follow-along has its own full-width frame; socket.io-client loads only with it.
     path: '/live/:sessionId',
+    handle: firstHtml(),
     errorElement: <RouteError />,
     hydrateFallbackElement: <LoadingBlock label="Setting out the pots…" />,
     lazy: () => import('./routes/live-follow.tsx'),

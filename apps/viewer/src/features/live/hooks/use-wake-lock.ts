@@ -1,8 +1,9 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useState, useSyncExternalStore } from 'react';
 
 export type WakeLockStatus = 'on' | 'off' | 'unsupported';
 
 const supported = () => window.isSecureContext && 'wakeLock' in navigator;
+const unchanging = () => () => undefined;
 
 /**
  * Keeps the screen on while `active` (Screen Wake Lock API). The browser drops the lock when the
@@ -10,7 +11,10 @@ const supported = () => window.isSecureContext && 'wakeLock' in navigator;
  * context: https, localhost or 127.0.0.1.
  */
 export function useWakeLock(active: boolean): WakeLockStatus {
-  const [status, setStatus] = useState<WakeLockStatus>(() => (supported() ? 'off' : 'unsupported'));
+  // Unknown to the server's first HTML (and the render that takes it over): "unsupported" until
+  // the phone itself is asked.
+  const canLock = useSyncExternalStore(unchanging, supported, () => false);
+  const [status, setStatus] = useState<WakeLockStatus>('off');
 
   useEffect(() => {
     if (!active || !supported()) return;
@@ -46,5 +50,5 @@ export function useWakeLock(active: boolean): WakeLockStatus {
     };
   }, [active]);
 
-  return status;
+  return canLock ? status : 'unsupported';
 }
