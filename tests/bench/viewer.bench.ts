@@ -215,7 +215,7 @@ async function main() {
       `phone ${phone.width}×${phone.height}; ${network.latencyMs} ms latency, ${network.downloadKbps} kbit/s down, ${network.uploadKbps} kbit/s up; CPU ${cpuSlowdown}× slower; median of ${runs} cold loads`,
     );
     say(
-      `first-screen JS budget ${kb(FIRST_SCREEN_JS_BUDGET_BYTES)} gzip; LCP target < ${targetLcpMs / 1000} s`,
+      `JS budget ${kb(FIRST_SCREEN_JS_BUDGET_BYTES)} gzip for the first screen (welcome); LCP target < ${targetLcpMs / 1000} s on every route`,
     );
     let missed = false;
     const { routes, end } = await routeUrls(url);
@@ -227,11 +227,14 @@ async function main() {
       const fcp = median(loads.map((l) => l.fcpMs));
       const lcp = median(loads.map((l) => l.lcpMs));
       const wire = median(loads.map((l) => l.wireJsBytes));
-      const jsOk = js.gzipBytes <= FIRST_SCREEN_JS_BUDGET_BYTES;
+      // Issue #11 sets the JS budget for the first screen; the other routes are shown against the
+      // same figure. Their first HTML comes from the server, so their scripts are not what paints.
+      const within = js.gzipBytes <= FIRST_SCREEN_JS_BUDGET_BYTES;
+      const jsWord = name === 'welcome' ? (within ? 'pass' : 'MISS') : within ? 'within' : 'over';
       const lcpOk = lcp < targetLcpMs;
-      missed ||= !jsOk || !lcpOk;
+      missed ||= (name === 'welcome' && !within) || !lcpOk;
       say(
-        `${name.padEnd(18)} JS ${kb(js.gzipBytes).padStart(9)} gzip (${js.files.length} files) ${jsOk ? 'pass' : 'MISS'}; ` +
+        `${name.padEnd(18)} JS ${kb(js.gzipBytes).padStart(9)} gzip (${js.files.length} files) ${jsWord}; ` +
           `${kb(wire).padStart(9)} JS over the wire; FCP ${(fcp / 1000).toFixed(2)} s; LCP ${(lcp / 1000).toFixed(2)} s ${lcpOk ? 'pass' : 'MISS'}`,
       );
     }
