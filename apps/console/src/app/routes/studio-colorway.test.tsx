@@ -3,6 +3,7 @@ import type {
   ColorwaySummary,
   ColorwayUpdate,
   StepOrder,
+  StepUpdate,
 } from '@vatside/contracts/workbench-colorways';
 import { http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
@@ -160,5 +161,41 @@ describe('Colorway editor', { timeout: 30_000 }, () => {
     ]);
     expect(items[2]).toHaveTextContent('Caution · Hot bath');
     expect(items[2]).toHaveTextContent('85 °C / 185 °F · Steady steam, no rolling boil');
+  });
+
+  it('changes a step in place: an untouched timer is kept, a typed one is read as min:sec', async () => {
+    openColorway();
+    const sent: StepUpdate[] = [];
+    server.use(
+      http.patch(`${colorwayApi}/steps/:stepId`, async ({ request, params }) => {
+        const patch = (await request.json()) as StepUpdate;
+        sent.push(patch);
+        const step = steps.find((s) => s.id === params.stepId)!;
+        return HttpResponse.json({ ...step, ...patch });
+      }),
+    );
+    const { user } = renderApp(page);
+    const sheet = await screen.findByRole('list', { name: 'Run sheet' }, firstRender);
+
+    // Step 1 holds a 30-minute timer (1800 s): the form shows it as min:sec.
+    await user.click(within(sheet).getByRole('button', { name: 'Change step 1' }));
+    const form = screen.getByRole('form', { name: 'Change step 1' });
+    expect(within(form).getByLabelText(/Timer/)).toHaveValue('30:00');
+    const instruction = within(form).getByLabelText('What to do');
+    await user.clear(instruction);
+    await user.type(instruction, 'Soak the skein in lukewarm water');
+    await user.click(within(form).getByRole('button', { name: 'Save changes' }));
+    expect(sent.at(-1)).toMatchObject({
+      instruction: 'Soak the skein in lukewarm water',
+      timerSeconds: 1800,
+    });
+    // Saved, the form closes and the add form is back.
+    await screen.findByRole('form', { name: 'Add a step' });
+
+    await user.click(within(sheet).getByRole('button', { name: 'Change step 2' }));
+    const second = screen.getByRole('form', { name: 'Change step 2' });
+    await user.type(within(second).getByLabelText(/Timer/), '12:30');
+    await user.click(within(second).getByRole('button', { name: 'Save changes' }));
+    expect(sent.at(-1)).toMatchObject({ timerSeconds: 750, temperatureC: 85, caution: 'hotBath' });
   });
 });

@@ -1,4 +1,5 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import type { Step } from '@vatside/contracts/workbench-colorways';
 import type { MeasureSystem } from '@vatside/dye-kit';
 import { textLinkClass } from '@vatside/ui/link-class.ts';
 import { ErrorPanel } from '@vatside/ui/ErrorPanel';
@@ -35,6 +36,7 @@ export function Component() {
     placeholderData: keepPreviousData,
   });
   const steps = useQuery(stepsQueryOptions(slug, colorwayId));
+  const [editingStep, setEditingStep] = useState<{ step: Step; number: number }>();
   const bases = useQuery(basesQueryOptions(slug, pickerPage));
   const pots = useQuery(potsQueryOptions(slug, pickerPage));
   const stocks = useQuery(stockSolutionsQueryOptions(slug, pickerPage));
@@ -121,10 +123,22 @@ export function Component() {
                       steps={list.steps}
                       lines={lineAmountLabels(detail)}
                       canEdit={canEdit}
+                      onEdit={(step, number) => setEditingStep({ step, number })}
                     />
                   )}
                 </QueryView>
-                {canEdit ? (
+                {canEdit && editingStep ? (
+                  <AddSection title={`Change step ${editingStep.number}`}>
+                    <StepForm
+                      key={editingStep.step.id}
+                      slug={slug}
+                      colorwayId={detail.id}
+                      lines={lineAmountLabels(detail)}
+                      editing={editingStep}
+                      onDone={() => setEditingStep(undefined)}
+                    />
+                  </AddSection>
+                ) : canEdit ? (
                   <AddSection title="Add a step">
                     <StepForm slug={slug} colorwayId={detail.id} lines={lineAmountLabels(detail)} />
                   </AddSection>

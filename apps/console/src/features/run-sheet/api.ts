@@ -4,6 +4,7 @@ import {
   stepSchema,
   type StepCreate,
   type StepList,
+  type StepUpdate,
 } from '@vatside/contracts/workbench-colorways';
 import { apiGet, apiSend } from '@vatside/ui/api-client.ts';
 import { studioApi } from '../../lib/studio-path.ts';
@@ -22,6 +23,17 @@ export function useCreateStep(slug: string, colorwayId: string) {
   return useMutation({
     mutationFn: (step: StepCreate) =>
       apiSend('POST', stepsPath(slug, colorwayId), step, stepSchema),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: stepsQueryOptions(slug, colorwayId).queryKey }),
+  });
+}
+
+/** Changes a step in place: its place in the run sheet and the live program's pointers stay. */
+export function useUpdateStep(slug: string, colorwayId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, patch }: { id: string; patch: StepUpdate }) =>
+      apiSend('PATCH', stepsPath(slug, colorwayId, id), patch, stepSchema),
     onSuccess: () =>
       queryClient.invalidateQueries({ queryKey: stepsQueryOptions(slug, colorwayId).queryKey }),
   });

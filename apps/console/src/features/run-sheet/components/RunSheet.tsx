@@ -8,19 +8,24 @@ import { StepItem } from './StepItem.tsx';
 /** A recipe line the host can point a step at, with its computed amount in words. */
 export type LineChoice = { id: string; name: string; amount: string };
 
-/** The ordered steps: drag by the handle, or use the move buttons (keyboard and wet thumbs). */
+/**
+ * The ordered steps: drag by the handle, or use the move buttons (keyboard and wet thumbs).
+ * "Change" opens a step in the form below the list.
+ */
 export function RunSheet({
   slug,
   colorwayId,
   steps,
   lines,
   canEdit,
+  onEdit,
 }: {
   slug: string;
   colorwayId: string;
   steps: Step[];
   lines: LineChoice[];
   canEdit: boolean;
+  onEdit: (step: Step, number: number) => void;
 }) {
   const reorder = useReorderSteps(slug, colorwayId);
   const remove = useDeleteStep(slug, colorwayId);
@@ -54,6 +59,7 @@ export function RunSheet({
             line={lines.find((l) => l.id === step.recipeLineId)}
             canEdit={canEdit}
             onMove={(by) => move(index, index + by)}
+            onEdit={() => onEdit(step, index + 1)}
             onDelete={() => remove.mutate(step.id)}
           />
         ))}

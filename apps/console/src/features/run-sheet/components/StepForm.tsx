@@ -1,16 +1,21 @@
-import { cautionKinds, stepCreateSchema } from '@vatside/contracts/workbench-colorways';
+import {
+  cautionKinds,
+  stepCreateSchema,
+  type Step,
+  type StepCreate,
+} from '@vatside/contracts/workbench-colorways';
 import { celsiusToFahrenheit } from '@vatside/dye-kit';
-import { Button } from '@vatside/ui/Button';
 import { FieldFrame, fieldInputClass } from '@vatside/ui/form/FieldFrame';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { formResolver } from '@vatside/ui/form/form-resolver.ts';
 import { SelectField } from '@vatside/ui/form/SelectField';
 import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
-import { useId } from 'react';
-import { useForm } from 'react-hook-form';
-import { formatAmount, parseTimer } from '../../../lib/format.ts';
-import { useCreateStep } from '../api.ts';
+import { useEffect, useId } from 'react';
+import { useForm, type Resolver } from 'react-hook-form';
+import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
+import { formatAmount, formatTimer, parseTimer } from '../../../lib/format.ts';
+import { useCreateStep, useUpdateStep } from '../api.ts';
 import { cautionNames, temperatureCues } from './names.ts';
 import type { LineChoice } from './RunSheet.tsx';
 
@@ -25,17 +30,51 @@ const blank = {
 const orNull = (v: string | null) => (v === null || v.trim() === '' ? null : v);
 const numberOrNull = (v: string | number | null) => (v === null || v === '' ? null : Number(v));
 
-/** A new step at the end of the run sheet. */
+/** A saved step as the form shows it: the timer in the min:sec the field is typed in. */
+const valuesOf = (step: Step) => ({
+  instruction: step.instruction,
+  recipeLineId: step.recipeLineId,
+  timerSeconds: step.timerSeconds === null ? null : formatTimer(step.timerSeconds),
+  temperatureC: step.temperatureC,
+  visualCue: step.visualCue,
+  caution: step.caution,
+});
+
+// The timer field reads min:sec when typed in; a saved step's timer starts as that text too and
+// stays text while untouched, so it is read the same way before the step is checked.
+const asTyped = formResolver(stepCreateSchema);
+const stepResolver: Resolver<StepCreate> = (values, context, options) =>
+  asTyped(
+    {
+      ...values,
+      timerSeconds:
+        typeof values.timerSeconds === 'string'
+          ? parseTimer(values.timerSeconds)
+          : values.timerSeconds,
+    },
+    context,
+    options,
+  );
+
+/**
+ * A new step at the end of the run sheet. With `editing`, the same form changes that step in
+ * place, and `onDone` closes it.
+ */
 export function StepForm({
   slug,
   colorwayId,
   lines,
+  editing,
+  onDone,
 }: {
   slug: string;
   colorwayId: string;
   lines: LineChoice[];
+  editing?: { step: Step; number: number };
+  onDone?: () => void;
 }) {
   const create = useCreateStep(slug, colorwayId);
+  const update = useUpdateStep(slug, colorwayId);
   const cuesId = useId();
   const {
     register,
@@ -43,12 +82,25 @@ export function StepForm({
     setError,
     reset,
     watch,
+    setFocus,
     formState: { errors, isSubmitting },
-  } = useForm({ resolver: formResolver(stepCreateSchema), defaultValues: blank });
+  } = useForm<StepCreate>({
+    resolver: stepResolver,
+    defaultValues: editing ? (valuesOf(editing.step) as StepCreate) : blank,
+  });
   const temperatureC = watch('temperatureC');
+  // Opened from a step's "Change": straight into its words, wherever the form is on the page.
+  useEffect(() => {
+    if (editing) setFocus('instruction');
+  }, [editing, setFocus]);
 
   const onSubmit = handleSubmit(async (step) => {
     try {
+      if (editing) {
+        await update.mutateAsync({ id: editing.step.id, patch: step });
+        onDone?.();
+        return;
+      }
       await create.mutateAsync(step);
       reset(blank);
     } catch (error) {
@@ -64,7 +116,12 @@ export function StepForm({
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} aria-label="Add a step" className="space-y-4">
+    <form
+      noValidate
+      onSubmit={onSubmit}
+      aria-label={editing ? `Change step ${editing.number}` : 'Add a step'}
+      className="space-y-4"
+    >
       {errors.root?.server ? <FormAlert>{errors.root.server.message}</FormAlert> : null}
       <FieldFrame label="What to do" error={errors.instruction?.message}>
         {(control) => (
@@ -132,9 +189,12 @@ export function StepForm({
           ))}
         </SelectField>
       </div>
-      <Button type="submit" disabled={isSubmitting}>
-        {isSubmitting ? 'Adding…' : 'Add step'}
-      </Button>
+      <AddOrSaveButtons
+        addLabel="Add step"
+        changing={editing !== undefined}
+        submitting={isSubmitting}
+        onCancel={onDone}
+      />
     </form>
   );
 }

@@ -1,5 +1,6 @@
 import type { Step } from '@vatside/contracts/workbench-colorways';
 import { celsiusToFahrenheit } from '@vatside/dye-kit';
+import { Button } from '@vatside/ui/Button';
 import { StepCaution } from '@vatside/ui/StepCaution';
 import { MoveButtons, SortableItem } from '../../../components/SortableList.tsx';
 import { TwoPressButton } from '../../../components/TwoPressButton.tsx';
@@ -13,6 +14,7 @@ export function StepItem({
   line,
   canEdit,
   onMove,
+  onEdit,
   onDelete,
 }: {
   step: Step;
@@ -21,6 +23,7 @@ export function StepItem({
   line: LineChoice | undefined;
   canEdit: boolean;
   onMove: (by: -1 | 1) => void;
+  onEdit: () => void;
   onDelete: () => void;
 }) {
   return (
@@ -55,6 +58,9 @@ export function StepItem({
         {canEdit ? (
           <div className="flex flex-wrap gap-2">
             <MoveButtons itemWord="step" number={number} isLast={isLast} onMove={onMove} />
+            <Button variant="secondary" aria-label={`Change step ${number}`} onClick={onEdit}>
+              Change
+            </Button>
             <TwoPressButton
               label={`Delete step ${number}`}
               confirm="Yes, delete"
