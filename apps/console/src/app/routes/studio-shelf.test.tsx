@@ -1,11 +1,21 @@
 import { screen, within } from '@testing-library/react';
-import type { Dye, DyeUpdate } from '@vatside/contracts/workbench-shelf';
+import type {
+  Dye,
+  DyeUpdate,
+  StockSolution,
+  StockSolutionUpdate,
+} from '@vatside/contracts/workbench-shelf';
 import { http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
 import { hostMe } from '../../testing/fixtures.ts';
 import { firstRender, renderApp } from '../../testing/render-app.tsx';
 import { server, signIn } from '../../testing/server.ts';
-import { studioApi, tealDye, workbenchAsHost } from '../../testing/workbench-fixtures.ts';
+import {
+  studioApi,
+  tealDye,
+  tealStock,
+  workbenchAsHost,
+} from '../../testing/workbench-fixtures.ts';
 
 describe('The dye shelf', { timeout: 30_000 }, () => {
   it('changes a dye in place: its jars and recipes keep pointing at the same dye', async () => {
@@ -43,5 +53,42 @@ describe('The dye shelf', { timeout: 30_000 }, () => {
       },
     ]);
     expect(await within(table).findByText('Rockpool teal, 2026 lot')).toBeVisible();
+  });
+
+  it('corrects a jar as it was recorded, leaving what is left to adjustments', async () => {
+    signIn(hostMe);
+    let stocks: StockSolution[] = [tealStock];
+    workbenchAsHost({ dyes: [tealDye] });
+    const sent: StockSolutionUpdate[] = [];
+    server.use(
+      http.get(`${studioApi}/stock-solutions`, () =>
+        HttpResponse.json({ items: stocks, page: { limit: 25, offset: 0, total: stocks.length } }),
+      ),
+      http.patch(`${studioApi}/stock-solutions/:stockId`, async ({ request }) => {
+        const body = (await request.json()) as StockSolutionUpdate;
+        sent.push(body);
+        // 2 % w/v is 2 g per 100 mL: 500 mL of it holds 10 g of dye (common practice).
+        stocks = [{ ...tealStock, ...body, dyeLeftG: 10 }];
+        return HttpResponse.json(stocks[0]);
+      }),
+    );
+    const { user } = renderApp('/studios/kelpwhistle-dyeworks/shelf');
+
+    const table = await screen.findByRole('table', { name: /stock solutions/i }, firstRender);
+    await user.click(
+      within(table).getByRole('button', { name: 'Change the Rockpool teal 1 % jar' }),
+    );
+    const form = screen.getByRole('form', { name: 'Change the Rockpool teal jar' });
+    const strength = within(form).getByLabelText(/Strength/);
+    expect(strength).toHaveValue(1);
+    await user.clear(strength);
+    await user.type(strength, '2');
+    await user.click(within(form).getByRole('button', { name: 'Save changes' }));
+
+    expect(await screen.findByRole('form', { name: 'Add a stock solution' })).toBeVisible();
+    expect(sent).toEqual([
+      { dyeId: tealDye.id, stockStrengthPct: 2, volumeMadeMl: 500, madeOn: '2025-04-01' },
+    ]);
+    expect(await within(table).findByText('10 g of dye')).toBeVisible();
   });
 });

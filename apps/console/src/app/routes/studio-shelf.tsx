@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { Dye } from '@vatside/contracts/workbench-shelf';
+import type { Dye, StockSolution } from '@vatside/contracts/workbench-shelf';
 import { SafetyNote } from '@vatside/ui/SafetyNote';
 import { useState } from 'react';
 import { AddSection } from '../../components/AddSection.tsx';
@@ -24,6 +24,7 @@ export function Component() {
   // The stock form offers every dye, not only the page on screen.
   const allDyes = useQuery({ ...dyesQueryOptions(slug, pickerPage), enabled: canEdit });
   const [editingDye, setEditingDye] = useState<Dye>();
+  const [editingStock, setEditingStock] = useState<StockSolution>();
 
   return (
     <div className="space-y-6">
@@ -63,12 +64,27 @@ export function Component() {
         >
           {(list) => (
             <>
-              <StockSolutionsTable slug={slug} stocks={list.items} canEdit={canEdit} />
+              <StockSolutionsTable
+                slug={slug}
+                stocks={list.items}
+                canEdit={canEdit}
+                onEdit={setEditingStock}
+              />
               <Pager page={list.page} noun="jars" onOffset={setStockOffset} />
             </>
           )}
         </QueryView>
-        {canEdit && allDyes.data ? (
+        {canEdit && allDyes.data && editingStock ? (
+          <AddSection title={`Change the ${editingStock.dyeName} jar`}>
+            <StockSolutionForm
+              key={editingStock.id}
+              slug={slug}
+              dyes={allDyes.data.items}
+              editing={editingStock}
+              onDone={() => setEditingStock(undefined)}
+            />
+          </AddSection>
+        ) : canEdit && allDyes.data ? (
           <AddSection title="Add a stock solution">
             <StockSolutionForm
               key={allDyes.data.items.length}

@@ -9,6 +9,7 @@ import {
   type DyeUpdate,
   type StockAdjustmentCreate,
   type StockSolutionCreate,
+  type StockSolutionUpdate,
 } from '@vatside/contracts/workbench-shelf';
 import { apiGet, apiSend } from '@vatside/ui/api-client.ts';
 import { studioApi, withPage, type PageAt } from '../../lib/studio-path.ts';
@@ -71,6 +72,11 @@ export const useDeleteDye = (slug: string) =>
 export const useCreateStockSolution = (slug: string) =>
   useShelfMutation(slug, (stock: StockSolutionCreate) =>
     apiSend('POST', studioApi(slug, 'stock-solutions'), stock, stockSolutionSchema),
+  );
+
+export const useUpdateStockSolution = (slug: string) =>
+  useShelfMutation(slug, ({ id, patch }: { id: string; patch: StockSolutionUpdate }) =>
+    apiSend('PATCH', studioApi(slug, 'stock-solutions', id), patch, stockSolutionSchema),
   );
 
 export const useDeleteStockSolution = (slug: string) =>

@@ -1,24 +1,45 @@
-import type { Dye } from '@vatside/contracts/workbench-shelf';
+import type { Dye, StockSolution } from '@vatside/contracts/workbench-shelf';
 import { stockSolutionCreateSchema } from '@vatside/contracts/workbench-shelf';
-import { Button } from '@vatside/ui/Button';
 import { FormAlert } from '@vatside/ui/form/FormAlert';
 import { formResolver } from '@vatside/ui/form/form-resolver.ts';
 import { SelectField } from '@vatside/ui/form/SelectField';
 import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
 import { useForm } from 'react-hook-form';
-import { useCreateStockSolution } from '../api.ts';
+import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
+import { useCreateStockSolution, useUpdateStockSolution } from '../api.ts';
 
 const today = () => new Date().toISOString().slice(0, 10);
 
-/** Record a jar just mixed: which dye, how strong, how much. */
-export function StockSolutionForm({ slug, dyes }: { slug: string; dyes: Dye[] }) {
+/**
+ * Record a jar just mixed: which dye, how strong, how much. With `editing`, the same form
+ * corrects that jar in place (recipes keep pointing at it); what is left changes only by an
+ * adjustment, so it is not here.
+ */
+export function StockSolutionForm({
+  slug,
+  dyes,
+  editing,
+  onDone,
+}: {
+  slug: string;
+  dyes: Dye[];
+  editing?: StockSolution;
+  onDone?: () => void;
+}) {
   const create = useCreateStockSolution(slug);
+  const update = useUpdateStockSolution(slug);
   const blank = {
     dyeId: dyes[0]?.id ?? '',
     stockStrengthPct: 1,
     volumeMadeMl: 500,
     madeOn: today(),
+  };
+  const current = editing && {
+    dyeId: editing.dyeId,
+    stockStrengthPct: editing.stockStrengthPct,
+    volumeMadeMl: editing.volumeMadeMl,
+    madeOn: editing.madeOn,
   };
   const {
     register,
@@ -26,7 +47,10 @@ export function StockSolutionForm({ slug, dyes }: { slug: string; dyes: Dye[] })
     setError,
     reset,
     formState: { errors, isSubmitting },
-  } = useForm({ resolver: formResolver(stockSolutionCreateSchema), defaultValues: blank });
+  } = useForm({
+    resolver: formResolver(stockSolutionCreateSchema),
+    defaultValues: current ?? blank,
+  });
 
   if (dyes.length === 0) {
     return <p>Add a dye to the shelf first; a stock solution is mixed from one.</p>;
@@ -34,6 +58,11 @@ export function StockSolutionForm({ slug, dyes }: { slug: string; dyes: Dye[] })
 
   const onSubmit = handleSubmit(async (stock) => {
     try {
+      if (editing) {
+        await update.mutateAsync({ id: editing.id, patch: stock });
+        onDone?.();
+        return;
+      }
       await create.mutateAsync(stock);
       reset(blank);
     } catch (error) {
@@ -42,7 +71,12 @@ export function StockSolutionForm({ slug, dyes }: { slug: string; dyes: Dye[] })
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} aria-label="Add a stock solution" className="space-y-4">
+    <form
+      noValidate
+      onSubmit={onSubmit}
+      aria-label={editing ? `Change the ${editing.dyeName} jar` : 'Add a stock solution'}
+      className="space-y-4"
+    >
       {errors.root?.server ? <FormAlert>{errors.root.server.message}</FormAlert> : null}
       <div className="grid gap-4 sm:grid-cols-2">
         <SelectField label="Dye" error={errors.dyeId?.message} {...register('dyeId')}>
@@ -78,9 +112,12 @@ export function StockSolutionForm({ slug, dyes }: { slug: string; dyes: Dye[] })
           {...register('madeOn')}
         />
       </div>
-      <Button type="submit" disabled={isSubmitting}>
-        {isSubmitting ? 'Adding…' : 'Add stock solution'}
-      </Button>
+      <AddOrSaveButtons
+        addLabel="Add stock solution"
+        changing={editing !== undefined}
+        submitting={isSubmitting}
+        onCancel={onDone}
+      />
     </form>
   );
 }

@@ -12,15 +12,20 @@ import { StockJar } from './StockJar.tsx';
 
 const column = createColumnHelper<StockSolution>();
 
-/** Every jar of stock: strength, made, left; pick one to adjust it or see its history. */
+/**
+ * Every jar of stock: strength, made, left; pick one to adjust it or see its history, or to
+ * correct how it was recorded ("Change", in the form below).
+ */
 export function StockSolutionsTable({
   slug,
   stocks,
   canEdit,
+  onEdit,
 }: {
   slug: string;
   stocks: StockSolution[];
   canEdit: boolean;
+  onEdit: (stock: StockSolution) => void;
 }) {
   const remove = useDeleteStockSolution(slug);
   const { mutate } = remove;
@@ -69,6 +74,15 @@ export function StockSolutionsTable({
               <span className="sr-only"> of {row.original.dyeName}</span>
             </Button>
             {canEdit ? (
+              <Button
+                variant="secondary"
+                aria-label={`Change the ${row.original.dyeName} ${formatPct(row.original.stockStrengthPct)} jar`}
+                onClick={() => onEdit(row.original)}
+              >
+                Change
+              </Button>
+            ) : null}
+            {canEdit ? (
               <TwoPressButton
                 label={`Delete ${row.original.dyeName} ${formatPct(row.original.stockStrengthPct)}`}
                 confirm="Yes, delete"
@@ -79,7 +93,7 @@ export function StockSolutionsTable({
         ),
       }),
     ],
-    [canEdit, mutate, openId],
+    [canEdit, mutate, onEdit, openId],
   );
   return (
     <div className="space-y-3">
