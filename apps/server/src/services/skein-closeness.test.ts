@@ -16,7 +16,7 @@ async function photo(yarn: string, other: string) {
     .composite([{ input: half, left: 0, top: 0 }])
     .png()
     .toBuffer();
-  return { web, width: 120, height: 80 };
+  return { web };
 }
 const LEFT = { x: 0, y: 0, width: 0.5, height: 1 };
 const RIGHT = { x: 0.5, y: 0, width: 0.5, height: 1 };

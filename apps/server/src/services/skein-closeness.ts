@@ -1,9 +1,8 @@
 import { randomUUID } from 'node:crypto';
-import sharp from 'sharp';
 import { extractPalette, hexToLab, paletteCloseness, type Lab } from '@vatside/dye-kit';
 import type { YarnCrop } from '@vatside/contracts/submissions';
 import type { StoredSwatch } from '@vatside/db/schema';
-import { sampleAreaOf } from '../uploads/process-image.ts';
+import { sampleAreaOf, smallCopyOf } from '../uploads/process-image.ts';
 
 // "Close to the inspiration": the main colors of the yarn areas the sharer marked, compared with
 // the month's inspiration palette by dye-kit (share-weighted ΔE2000, CIEDE2000 per Sharma, Wu &
@@ -25,15 +24,13 @@ export function yarnSamplesPalette(samples: Uint8Array[]): StoredSwatch[] {
 export interface MarkedPhoto {
   /** The pipeline's upright web rendition. */
   web: Uint8Array;
-  width: number;
-  height: number;
   crop: YarnCrop;
 }
 
 /** The palette of the marked yarn areas of stored web renditions (a skein's areas re-marked). */
 export async function yarnAreaPalette(photos: MarkedPhoto[]): Promise<StoredSwatch[]> {
   const samples = await Promise.all(
-    photos.map((p) => sampleAreaOf(sharp(p.web), p.width, p.height, p.crop)),
+    photos.map(async (p) => sampleAreaOf(await smallCopyOf(p.web), p.crop)),
   );
   return yarnSamplesPalette(samples);
 }

@@ -278,8 +278,6 @@ export async function updateMySubmission(
     const marked = await Promise.all(
       current.photos.map(async (p) => ({
         web: await store.getBytes(p.webKey),
-        width: p.width,
-        height: p.height,
         crop: newCrops.get(p.id) ?? p.yarnCrop,
       })),
     );
