@@ -65,6 +65,16 @@ describe('live session: the host’s actions', () => {
     expect(kelp && remainingMs(kelp.timer, 100_000)).toBe(150_000);
   });
 
+  it('moves a pot one step for a double tap: the second, sent from the same screen, is refused', () => {
+    const tap = { type: 'step:next', potId: 'lagoon', fromStep: 0 } as const;
+    const once = applyHostAction(session(), tap, 0, noteId);
+    expect(once.pots[0]?.stepIndex).toBe(1);
+    expect(() => applyHostAction(once, tap, 500, noteId)).toThrow(/already on step 2/);
+    // From the screen that shows step 2, the move goes ahead.
+    const twice = applyHostAction(once, { ...tap, fromStep: 1 }, 1_000, noteId);
+    expect(twice.pots[0]?.stepIndex).toBe(2);
+  });
+
   it('refuses what makes no sense, with a plain reason', () => {
     const s = session();
     expect(() => applyHostAction(s, { type: 'step:previous', potId: 'lagoon' }, 0, noteId)).toThrow(

@@ -43,10 +43,16 @@ export type LiveState = z.infer<typeof liveStateSchema>;
 export const maxStreamDelayMs = 120_000;
 const keptNotes = 20;
 
+/**
+ * The step a pot showed on the sender's screen (0-based). A pot that has moved on since refuses
+ * the move: a double tap, or a second person at the controls, moves one step, not two.
+ */
+const fromStepSchema = z.number().int().nonnegative().optional();
+
 /** What the host's controls send. Validated on the server before anything changes. */
 export const hostActionSchema = z.discriminatedUnion('type', [
-  z.object({ type: z.literal('step:next'), potId: z.string() }),
-  z.object({ type: z.literal('step:previous'), potId: z.string() }),
+  z.object({ type: z.literal('step:next'), potId: z.string(), fromStep: fromStepSchema }),
+  z.object({ type: z.literal('step:previous'), potId: z.string(), fromStep: fromStepSchema }),
   z.object({ type: z.literal('timer:start'), potId: z.string() }),
   z.object({ type: z.literal('timer:pause'), potId: z.string() }),
   z.object({ type: z.literal('timer:resume'), potId: z.string() }),
@@ -85,7 +91,12 @@ function updatePot(state: LiveState, potId: string, change: (pot: LivePot) => Li
   return { ...state, pots: state.pots.map((p) => (p.potId === potId ? change(p) : p)) };
 }
 
-function moveStep(pot: LivePot, by: 1 | -1): LivePot {
+function moveStep(pot: LivePot, by: 1 | -1, fromStep: number | undefined): LivePot {
+  if (fromStep !== undefined && pot.stepIndex !== fromStep) {
+    throw new LiveActionError(
+      `${pot.colorwayName} is already on step ${pot.stepIndex + 1}; your screen was behind. Check it and tap again.`,
+    );
+  }
   const stepIndex = pot.stepIndex + by;
   if (stepIndex < 0 || stepIndex >= pot.stepCount) {
     throw new LiveActionError(
@@ -109,9 +120,9 @@ export function applyHostAction(
   const next = ((): LiveState => {
     switch (action.type) {
       case 'step:next':
-        return updatePot(state, action.potId, (pot) => moveStep(pot, 1));
+        return updatePot(state, action.potId, (pot) => moveStep(pot, 1, action.fromStep));
       case 'step:previous':
-        return updatePot(state, action.potId, (pot) => moveStep(pot, -1));
+        return updatePot(state, action.potId, (pot) => moveStep(pot, -1, action.fromStep));
       case 'timer:start':
         return updatePot(state, action.potId, (pot) => {
           if (pot.timer.durationMs <= 0)

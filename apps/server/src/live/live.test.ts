@@ -111,6 +111,23 @@ describe('live session over Socket.IO (real server, real database)', () => {
     expect((await seen).state.pots[0]?.stepIndex).toBe(1);
   });
 
+  it('takes a double tap on "next" as one step: the second, from the same screen, is refused', async () => {
+    const host = track(await open(server, cast.clients.host));
+    const { state } = await join(host, live.liveSessionId);
+    const fromStep = state.pots[0]!.stepIndex;
+    const tap = { type: 'step:next', potId: live.potId, fromStep } as const;
+    const [first, second] = await Promise.all([
+      act(host, live.liveSessionId, tap),
+      act(host, live.liveSessionId, tap),
+    ]);
+    const replies = [first, second];
+    expect(replies.filter((r) => 'state' in r)).toHaveLength(1);
+    expect(replies.find((r) => 'error' in r)).toMatchObject({ error: { code: 'CONFLICT' } });
+    const { state: after } = await join(host, live.liveSessionId);
+    expect(after.pots[0]?.stepIndex).toBe(fromStep + 1);
+    await act(host, live.liveSessionId, { type: 'step:previous', potId: live.potId });
+  });
+
   it('refuses a step past the end with a plain reason, changing nothing', async () => {
     const host = track(await open(server, cast.clients.host));
     const { state } = await join(host, live.liveSessionId);

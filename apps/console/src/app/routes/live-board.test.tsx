@@ -64,7 +64,8 @@ describe('Pot board', () => {
 
       await user.click(within(pot(1)).getByRole('button', { name: 'Next step →' }));
 
-      expect(socket.actions()).toEqual([{ type: 'step:next', potId: lowTide.potId }]);
+      // The step on screen goes along, so a second tap before the board updates is refused.
+      expect(socket.actions()).toEqual([{ type: 'step:next', potId: lowTide.potId, fromStep: 0 }]);
       expect(await within(pot(1)).findByText('Heat the bath to a simmer.')).toBeInTheDocument();
       expect(within(pot(1)).getByText(/Step 2 of 3/)).toBeInTheDocument();
       expect(within(pot(1)).getByText(/Caution · Hot bath/)).toBeInTheDocument();
@@ -123,12 +124,12 @@ describe('Pot board', () => {
 
     await waitFor(() =>
       expect(socket.actions()).toEqual([
-        { type: 'step:next', potId: kelpShade.potId },
+        { type: 'step:next', potId: kelpShade.potId, fromStep: 0 },
         { type: 'timer:start', potId: kelpShade.potId },
         { type: 'timer:extend', potId: kelpShade.potId, byMs: 60_000 },
         { type: 'timer:extend', potId: kelpShade.potId, byMs: 300_000 },
-        { type: 'step:previous', potId: kelpShade.potId },
-        { type: 'step:next', potId: lowTide.potId },
+        { type: 'step:previous', potId: kelpShade.potId, fromStep: 1 },
+        { type: 'step:next', potId: lowTide.potId, fromStep: 0 },
       ]),
     );
   });
@@ -145,7 +146,9 @@ describe('Pot board', () => {
     await user.click(screen.getByLabelText('Note'));
     await user.keyboard('n 2');
     expect(screen.getByLabelText('Note')).toHaveValue('n 2');
-    expect(socket.actions()).toEqual([{ type: 'step:previous', potId: lowTide.potId }]);
+    expect(socket.actions()).toEqual([
+      { type: 'step:previous', potId: lowTide.potId, fromStep: 0 },
+    ]);
   });
 
   it('counts down on the server’s clock, not this machine’s', async () => {

@@ -136,7 +136,9 @@ function Board({
     const pot = chosen === null ? undefined : state.pots[chosen];
     if (!pot) return setKeyHint('Press a pot’s number first.');
     setKeyHint('');
-    if (command.kind === 'step') return void send({ type: command.type, potId: pot.potId });
+    if (command.kind === 'step') {
+      return void send({ type: command.type, potId: pot.potId, fromStep: pot.stepIndex });
+    }
     if (command.kind === 'extend') {
       return void send({ type: 'timer:extend', potId: pot.potId, byMs: command.byMs });
     }

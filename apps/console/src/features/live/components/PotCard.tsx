@@ -46,9 +46,11 @@ export function PotCard({
     () => (program ? stepAmount(program, step, system) : null),
     [program, step, system],
   );
-  const act = (
-    type: 'step:next' | 'step:previous' | 'timer:start' | 'timer:pause' | 'timer:resume',
-  ) => onAction({ type, potId: pot.potId });
+  const act = (type: 'timer:start' | 'timer:pause' | 'timer:resume') =>
+    onAction({ type, potId: pot.potId });
+  // The step on screen goes along: a second tap before the board updates is refused, not applied.
+  const move = (type: 'step:next' | 'step:previous') =>
+    onAction({ type, potId: pot.potId, fromStep: pot.stepIndex });
   const extend = (byMs: 60_000 | 300_000) =>
     onAction({ type: 'timer:extend', potId: pot.potId, byMs });
 
@@ -99,10 +101,10 @@ export function PotCard({
       ) : null}
 
       <div className="grid grid-cols-2 gap-2">
-        <Button size="hand" variant="secondary" onClick={() => act('step:previous')}>
+        <Button size="hand" variant="secondary" onClick={() => move('step:previous')}>
           ← Previous step
         </Button>
-        <Button size="hand" onClick={() => act('step:next')}>
+        <Button size="hand" onClick={() => move('step:next')}>
           Next step →
         </Button>
         {toggle ? (
