@@ -182,6 +182,7 @@ describe('Colorway editor', { timeout: 30_000 }, () => {
     const form = screen.getByRole('form', { name: 'Change step 1' });
     expect(within(form).getByLabelText(/Timer/)).toHaveValue('30:00');
     const instruction = within(form).getByLabelText('What to do');
+    expect(instruction).toHaveFocus();
     await user.clear(instruction);
     await user.type(instruction, 'Soak the skein in lukewarm water');
     await user.click(within(form).getByRole('button', { name: 'Save changes' }));

@@ -79,6 +79,8 @@ describe('The dye shelf', { timeout: 30_000 }, () => {
       within(table).getByRole('button', { name: 'Change the Rockpool teal 1 % jar' }),
     );
     const form = screen.getByRole('form', { name: 'Change the Rockpool teal jar' });
+    // Opened from the row, the form takes the focus wherever it sits on the page.
+    expect(within(form).getByLabelText('Dye')).toHaveFocus();
     const strength = within(form).getByLabelText(/Strength/);
     expect(strength).toHaveValue(1);
     await user.clear(strength);

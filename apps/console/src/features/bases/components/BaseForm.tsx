@@ -10,6 +10,7 @@ import { WarningList } from '@vatside/ui/WarningList';
 import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
+import { useFocusWhenChanging } from '../../../components/use-focus-when-changing.ts';
 import { formatAmount } from '../../../lib/format.ts';
 import { useCreateBase, useUpdateBase } from '../api.ts';
 import { fiberNames, weightClassNames } from './names.ts';
@@ -57,11 +58,13 @@ export function BaseForm({
     setError,
     reset,
     watch,
+    setFocus,
     formState: { errors, isSubmitting },
   } = useForm({
     resolver: formResolver(baseCreateSchema),
     defaultValues: editing ? valuesOf(editing) : blank(),
   });
+  useFocusWhenChanging(editing !== undefined, setFocus, 'name');
   const fibers = useFieldArray({ control, name: 'fiberContent' });
   const lengthM = watch('skeinLengthM');
 

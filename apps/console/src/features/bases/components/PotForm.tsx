@@ -7,6 +7,7 @@ import { SelectField } from '@vatside/ui/form/SelectField';
 import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
 import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
+import { useFocusWhenChanging } from '../../../components/use-focus-when-changing.ts';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { useCreatePot, useUpdatePot } from '../api.ts';
@@ -37,6 +38,7 @@ export function PotForm({
     setError,
     reset,
     watch,
+    setFocus,
     formState: { errors, isSubmitting },
   } = useForm({
     resolver: formResolver(potFormSchema),
@@ -48,6 +50,7 @@ export function PotForm({
         }
       : blank,
   });
+  useFocusWhenChanging(editing !== undefined, setFocus, 'name');
   const capacityL = watch('capacityL');
   const material = watch('material');
 

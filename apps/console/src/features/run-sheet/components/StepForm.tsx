@@ -11,9 +11,10 @@ import { formResolver } from '@vatside/ui/form/form-resolver.ts';
 import { SelectField } from '@vatside/ui/form/SelectField';
 import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
-import { useEffect, useId } from 'react';
+import { useId } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
 import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
+import { useFocusWhenChanging } from '../../../components/use-focus-when-changing.ts';
 import { formatAmount, formatTimer, parseTimer } from '../../../lib/format.ts';
 import { useCreateStep, useUpdateStep } from '../api.ts';
 import { cautionNames, temperatureCues } from './names.ts';
@@ -89,10 +90,7 @@ export function StepForm({
     defaultValues: editing ? (valuesOf(editing.step) as StepCreate) : blank,
   });
   const temperatureC = watch('temperatureC');
-  // Opened from a step's "Change": straight into its words, wherever the form is on the page.
-  useEffect(() => {
-    if (editing) setFocus('instruction');
-  }, [editing, setFocus]);
+  useFocusWhenChanging(editing !== undefined, setFocus, 'instruction');
 
   const onSubmit = handleSubmit(async (step) => {
     try {

@@ -6,6 +6,7 @@ import { SelectField } from '@vatside/ui/form/SelectField';
 import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
 import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
+import { useFocusWhenChanging } from '../../../components/use-focus-when-changing.ts';
 import { useForm } from 'react-hook-form';
 import { useCreateDye, useUpdateDye } from '../api.ts';
 import { dyeKindNames } from './kind-names.ts';
@@ -33,6 +34,7 @@ export function DyeForm({
     setError,
     reset,
     watch,
+    setFocus,
     formState: { errors, isSubmitting },
   } = useForm({
     resolver: formResolver(dyeCreateSchema),
@@ -45,6 +47,7 @@ export function DyeForm({
         }
       : blank,
   });
+  useFocusWhenChanging(editing !== undefined, setFocus, 'name');
   const hex = watch('swatchHex');
 
   const onSubmit = handleSubmit(async (dye) => {

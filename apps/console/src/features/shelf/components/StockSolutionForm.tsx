@@ -7,6 +7,7 @@ import { showServerError } from '@vatside/ui/form/server-errors.ts';
 import { TextField } from '@vatside/ui/form/TextField';
 import { useForm } from 'react-hook-form';
 import { AddOrSaveButtons } from '../../../components/AddOrSaveButtons.tsx';
+import { useFocusWhenChanging } from '../../../components/use-focus-when-changing.ts';
 import { useCreateStockSolution, useUpdateStockSolution } from '../api.ts';
 
 const today = () => new Date().toISOString().slice(0, 10);
@@ -46,11 +47,13 @@ export function StockSolutionForm({
     handleSubmit,
     setError,
     reset,
+    setFocus,
     formState: { errors, isSubmitting },
   } = useForm({
     resolver: formResolver(stockSolutionCreateSchema),
     defaultValues: current ?? blank,
   });
+  useFocusWhenChanging(editing !== undefined, setFocus, 'dyeId');
 
   if (dyes.length === 0) {
     return <p>Add a dye to the shelf first; a stock solution is mixed from one.</p>;
