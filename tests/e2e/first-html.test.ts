@@ -53,7 +53,7 @@ describe('a landing page over plain HTTP', () => {
     expect(root).toContain('$&amp; $1');
     // The answers ride in a JSON data block; "<" is escaped so no text can end the element.
     const data = html.match(
-      /<script type="application\/json" id="vatside-first-html-queries">([^<]*)<\/script>/,
+      /<script type="application\/json" id="vatside-first-html">([^<]*)<\/script>/,
     );
     expect(data, 'the data block').not.toBeNull();
     expect(data![1]).toContain('\\u003c/script>');
@@ -118,6 +118,11 @@ describe('in Chromium', () => {
     ).resolves.toBe(0);
     await expect(page.evaluate(() => '__taken' in window)).resolves.toBe(false);
     expect(problems).toEqual([]);
+
+    // The phone told the server its zone: the next first HTML is written in it.
+    const again = await page.request.get(`${appOrigin}${dyeAlongPath()}`);
+    // React separates adjacent text with an empty comment.
+    expect(rootOf(await again.text())).toMatch(/Your time zone: (<!-- -->)?Pacific\/Auckland/);
 
     // Taken over, the page moves on without a page load.
     await page.getByRole('link', { name: 'Studios' }).click();

@@ -15,13 +15,13 @@ const shell = '<!doctype html><html><body><div id="root"></div><script src="/a.j
 
 /** A viewer build whose entry-server.js answers by the page's path. */
 const entryServer = `
-export const FIRST_HTML_QUERIES_ID = 'first-queries';
+export const FIRST_HTML_DATA_ID = 'first-data';
 export async function renderFirstHtml({ url, forwardHeaders, apiOrigin }) {
   if (url === '/broken') throw new Error('render failed');
   if (url === '/slow') return new Promise(() => {});
   if (url === '/not-written') return null;
   const asked = JSON.stringify({ forwardHeaders, apiOrigin });
-  return { status: url === '/gone' ? 404 : 200, html: '<h1>Tide $& pool</h1>', queriesJson: asked };
+  return { status: url === '/gone' ? 404 : 200, html: '<h1>Tide $& pool</h1>', dataJson: asked };
 }`;
 
 let dir: string;
@@ -59,7 +59,7 @@ describe('viewer pages', () => {
     const html = await res.text();
     // "$&" stays as written: String.replace would otherwise put the matched text there.
     expect(html).toContain('<div id="root"><h1>Tide $& pool</h1></div>');
-    const data = html.match(/<script type="application\/json" id="first-queries">(.*?)<\/script>/);
+    const data = html.match(/<script type="application\/json" id="first-data">(.*?)<\/script>/);
     const asked = JSON.parse(data![1]!) as {
       forwardHeaders: Record<string, string>;
       apiOrigin: string;

@@ -11,12 +11,12 @@ import type { Logger } from './logger.ts';
 
 /** What the viewer's dist-server/entry-server.js exports. */
 interface FirstHtmlModule {
-  FIRST_HTML_QUERIES_ID: string;
+  FIRST_HTML_DATA_ID: string;
   renderFirstHtml(request: {
     url: string;
     forwardHeaders: Record<string, string>;
     apiOrigin: string;
-  }): Promise<{ status: number; html: string; queriesJson: string } | null>;
+  }): Promise<{ status: number; html: string; dataJson: string } | null>;
 }
 
 /** Past this the plain shell goes out: a slow API should not hold the page back. */
@@ -68,7 +68,7 @@ export function viewerPages(
                   },
                   apiOrigin: ownOrigin(req),
                 })
-                .then((written) => written && { ...written, dataId: module.FIRST_HTML_QUERIES_ID }),
+                .then((written) => written && { ...written, dataId: module.FIRST_HTML_DATA_ID }),
               timeLimit(timeLimitMs),
             ]),
           )
@@ -89,7 +89,7 @@ export function viewerPages(
         shell.replace(
           ROOT,
           () =>
-            `<div id="root">${page.html}</div><script type="application/json" id="${page.dataId}">${page.queriesJson}</script>`,
+            `<div id="root">${page.html}</div><script type="application/json" id="${page.dataId}">${page.dataJson}</script>`,
         ),
       );
   };

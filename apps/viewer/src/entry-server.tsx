@@ -7,6 +7,12 @@ import { setApiTransport } from '@vatside/ui/api-client.ts';
 import { createQueryClient } from '@vatside/ui/query-client.ts';
 import { AppProviders } from './app/providers.tsx';
 import { routes, type ViewerRouteHandle } from './app/routes.tsx';
+import type { FirstHtmlData } from './first-html.ts';
+import {
+  FirstHtmlTimeZone,
+  knownTimeZone,
+  TIME_ZONE_COOKIE,
+} from './hooks/use-device-time-zone.ts';
 
 // A landing page's first HTML, written on the server so a phone on a slow connection sees the
 // page before the app's scripts have arrived and run; the browser then takes it over (main.tsx).
@@ -21,17 +27,17 @@ export interface FirstHtmlRequest {
   apiOrigin: string;
 }
 
-export { FIRST_HTML_QUERIES_ID } from './first-html.ts';
+export { FIRST_HTML_DATA_ID } from './first-html.ts';
 
 export interface FirstHtml {
   status: number;
   /** The markup inside #root. */
   html: string;
   /**
-   * The API answers for the browser's cache, as JSON safe inside a data block
+   * What it was written from (FirstHtmlData), as JSON safe inside a data block
    * (`<script type="application/json">`, which the content security policy lets through).
    */
-  queriesJson: string;
+  dataJson: string;
 }
 
 const asker = new AsyncLocalStorage<FirstHtmlRequest>();
@@ -85,6 +91,12 @@ export async function renderFirstHtml(request: FirstHtmlRequest): Promise<FirstH
     const page = (context.matches.at(-1)?.route.handle as ViewerRouteHandle | undefined)?.firstHtml;
     if (!page || context.errors) return null;
 
+    const cookie = request.forwardHeaders.cookie ?? '';
+    const sentZone = cookie
+      .split(/;\s*/)
+      .find((pair) => pair.startsWith(`${TIME_ZONE_COOKIE}=`))
+      ?.slice(TIME_ZONE_COOKIE.length + 1);
+    const timeZone = knownTimeZone(sentZone && decodeURIComponent(sentZone)) ?? 'UTC';
     const queryClient = createQueryClient();
     // A failed answer sends the page to the browser at once; the browser retries it there.
     queryClient.setDefaultOptions({
@@ -95,9 +107,11 @@ export async function renderFirstHtml(request: FirstHtmlRequest): Promise<FirstH
     const render = () =>
       renderToString(
         <StrictMode>
-          <AppProviders queryClient={queryClient}>
-            <StaticRouterProvider router={router} context={context} hydrate={false} />
-          </AppProviders>
+          <FirstHtmlTimeZone.Provider value={timeZone}>
+            <AppProviders queryClient={queryClient}>
+              <StaticRouterProvider router={router} context={context} hydrate={false} />
+            </AppProviders>
+          </FirstHtmlTimeZone.Provider>
         </StrictMode>,
       );
 
@@ -122,7 +136,7 @@ export async function renderFirstHtml(request: FirstHtmlRequest): Promise<FirstH
     return {
       status: page.status,
       html,
-      queriesJson: scriptJson(dehydrate(queryClient)),
+      dataJson: scriptJson({ queries: dehydrate(queryClient), timeZone } satisfies FirstHtmlData),
     };
   });
 }

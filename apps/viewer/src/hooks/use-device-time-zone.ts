@@ -1,15 +1,38 @@
-import { useSyncExternalStore } from 'react';
+import { createContext, useContext, useSyncExternalStore } from 'react';
 import { deviceTimeZone } from '@vatside/ui/account/time-zones.ts';
 
-/**
- * The zone a page's first HTML is written in. The server cannot know the phone's zone, so the
- * first HTML and the render that takes it over both read UTC; the phone's own zone follows at once.
- */
-export const FIRST_HTML_TIME_ZONE = 'UTC';
+// The server cannot see the phone's clock. The phone tells it in a cookie, so a page's first
+// HTML shows times in the phone's zone from the second visit on; on the first, it is UTC, and
+// the phone's own zone follows as soon as the page is taken over.
+
+/** The cookie that carries the phone's time zone to the server. */
+export const TIME_ZONE_COOKIE = 'vatside_tz';
+
+/** The zone the first HTML was written in: the render that takes it over must read the same. */
+export const FirstHtmlTimeZone = createContext('UTC');
+
+/** A zone name this runtime knows, else null (a cookie can hold anything). */
+export function knownTimeZone(name: string | undefined): string | null {
+  if (!name) return null;
+  try {
+    return new Intl.DateTimeFormat('en-US', { timeZone: name }).resolvedOptions().timeZone;
+  } catch {
+    return null;
+  }
+}
+
+/** Tells the server this phone's zone, for the first HTML of the next page. */
+export function rememberTimeZone() {
+  const zone = encodeURIComponent(deviceTimeZone());
+  if (!document.cookie.split('; ').includes(`${TIME_ZONE_COOKIE}=${zone}`)) {
+    document.cookie = `${TIME_ZONE_COOKIE}=${zone}; Path=/; Max-Age=31536000; SameSite=Lax`;
+  }
+}
 
 const unchanging = () => () => undefined;
 
-/** This device's time zone, UTC while the server's first HTML is being taken over. */
+/** This device's time zone; while a first HTML is taken over, the zone it was written in. */
 export function useDeviceTimeZone(): string {
-  return useSyncExternalStore(unchanging, deviceTimeZone, () => FIRST_HTML_TIME_ZONE);
+  const firstHtmlZone = useContext(FirstHtmlTimeZone);
+  return useSyncExternalStore(unchanging, deviceTimeZone, () => firstHtmlZone);
 }
