@@ -8,11 +8,7 @@ import { createQueryClient } from '@vatside/ui/query-client.ts';
 import { AppProviders } from './app/providers.tsx';
 import { routes, type ViewerRouteHandle } from './app/routes.tsx';
 import type { FirstHtmlData } from './first-html.ts';
-import {
-  FirstHtmlTimeZone,
-  knownTimeZone,
-  TIME_ZONE_COOKIE,
-} from './hooks/use-device-time-zone.ts';
+import { FirstHtmlTimeZone, timeZoneFromCookie } from './hooks/use-device-time-zone.ts';
 
 // A landing page's first HTML, written on the server so a phone on a slow connection sees the
 // page before the app's scripts have arrived and run; the browser then takes it over (main.tsx).
@@ -91,12 +87,7 @@ export async function renderFirstHtml(request: FirstHtmlRequest): Promise<FirstH
     const page = (context.matches.at(-1)?.route.handle as ViewerRouteHandle | undefined)?.firstHtml;
     if (!page || context.errors) return null;
 
-    const cookie = request.forwardHeaders.cookie ?? '';
-    const sentZone = cookie
-      .split(/;\s*/)
-      .find((pair) => pair.startsWith(`${TIME_ZONE_COOKIE}=`))
-      ?.slice(TIME_ZONE_COOKIE.length + 1);
-    const timeZone = knownTimeZone(sentZone && decodeURIComponent(sentZone)) ?? 'UTC';
+    const timeZone = timeZoneFromCookie(request.forwardHeaders.cookie) ?? 'UTC';
     const queryClient = createQueryClient();
     // A failed answer sends the page to the browser at once; the browser retries it there.
     queryClient.setDefaultOptions({

@@ -11,10 +11,18 @@ export const TIME_ZONE_COOKIE = 'vatside_tz';
 /** The zone the first HTML was written in: the render that takes it over must read the same. */
 export const FirstHtmlTimeZone = createContext('UTC');
 
-/** A zone name this runtime knows, else null (a cookie can hold anything). */
-export function knownTimeZone(name: string | undefined): string | null {
-  if (!name) return null;
+/**
+ * The zone a request's Cookie header names, if this runtime knows it; else null (a cookie can
+ * hold anything, including a broken %-escape).
+ */
+export function timeZoneFromCookie(cookieHeader: string | undefined): string | null {
+  const sent = cookieHeader
+    ?.split(/;\s*/)
+    .find((pair) => pair.startsWith(`${TIME_ZONE_COOKIE}=`))
+    ?.slice(TIME_ZONE_COOKIE.length + 1);
+  if (!sent) return null;
   try {
+    const name = decodeURIComponent(sent);
     return new Intl.DateTimeFormat('en-US', { timeZone: name }).resolvedOptions().timeZone;
   } catch {
     return null;
