@@ -32,7 +32,15 @@ function boundaryZones(appDir) {
 }
 
 export default tseslint.config(
-  { ignores: ['**/node_modules/**', '**/dist/**', '.local/**', 'packages/db/migrations/**'] },
+  {
+    ignores: [
+      '**/node_modules/**',
+      '**/dist/**',
+      '**/dist-server/**',
+      '.local/**',
+      'packages/db/migrations/**',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
