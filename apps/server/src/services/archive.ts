@@ -156,12 +156,10 @@ export async function searchArchive(
     db,
     rows.map((r) => r.row),
   );
-  let found = rows.map(({ row, month }) => ({
-    row,
-    month,
-    swatches: colors.get(row.id) ?? [],
-    deltaE: query.hex ? nearestDeltaE(colors.get(row.id) ?? [], query.hex) : null,
-  }));
+  let found = rows.map(({ row, month }) => {
+    const swatches = colors.get(row.id) ?? [];
+    return { row, month, swatches, deltaE: query.hex ? nearestDeltaE(swatches, query.hex) : null };
+  });
   if (query.hex) {
     found = found
       .filter((f) => f.deltaE !== null)

@@ -22,6 +22,16 @@ const OUTPUT_TYPE = 'image/jpeg';
  */
 const REDUCE = 'linear';
 
+/** At most `maxPx` a side, never enlarged. */
+const fitInside = (maxPx: number) =>
+  ({
+    width: maxPx,
+    height: maxPx,
+    fit: 'inside',
+    withoutEnlargement: true,
+    kernel: REDUCE,
+  }) as const;
+
 export interface Rendition {
   data: Buffer;
   width: number;
@@ -33,7 +43,7 @@ export interface ProcessedImage {
   web: Rendition;
   thumb: Rendition;
   palette: StoredSwatch[];
-  /** RGBA pixels of `sampleArea` (from the small copy), at most AREA_SAMPLE_MAX_PX a side; empty without one. */
+  /** RGBA pixels of `sampleArea` (from the small copy), at most AREA_SAMPLE_MAX_PX a side; or empty. */
   areaSample: Uint8Array;
 }
 
@@ -75,13 +85,7 @@ function areaPixels(width: number, height: number, area: AreaFractions) {
 export async function sampleAreaOf(small: Decoded, area: AreaFractions): Promise<Uint8Array> {
   return fromDecoded(small)
     .extract(areaPixels(small.raw.width, small.raw.height, area))
-    .resize({
-      width: AREA_SAMPLE_MAX_PX,
-      height: AREA_SAMPLE_MAX_PX,
-      fit: 'inside',
-      withoutEnlargement: true,
-      kernel: REDUCE,
-    })
+    .resize(fitInside(AREA_SAMPLE_MAX_PX))
     .ensureAlpha()
     .raw()
     .toBuffer();
@@ -156,15 +160,6 @@ async function encode(input: Sharp): Promise<Rendition> {
     .toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height, contentType: OUTPUT_TYPE };
 }
-
-const fitInside = (maxPx: number) =>
-  ({
-    width: maxPx,
-    height: maxPx,
-    fit: 'inside',
-    withoutEnlargement: true,
-    kernel: REDUCE,
-  }) as const;
 
 /**
  * The one decode of the upload, straight into the web rendition: `failOn: 'error'` refuses

@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import type { Base, Pot } from '@vatside/contracts/workbench-bases';
 import { useState } from 'react';
-import { AddSection } from '../../components/AddSection.tsx';
+import { ChangeOrAddSection } from '../../components/ChangeOrAddSection.tsx';
 import { Pager } from '../../components/Pager.tsx';
 import { Panel } from '../../components/Panel.tsx';
 import { QueryView } from '../../components/QueryView.tsx';
@@ -46,19 +46,20 @@ export function Component() {
             </>
           )}
         </QueryView>
-        {canEdit && editingBase ? (
-          <AddSection title={`Change ${editingBase.name}`}>
-            <BaseForm
-              key={editingBase.id}
-              slug={slug}
-              editing={editingBase}
-              onDone={() => setEditingBase(undefined)}
-            />
-          </AddSection>
-        ) : canEdit ? (
-          <AddSection title="Add a base">
-            <BaseForm slug={slug} />
-          </AddSection>
+        {canEdit ? (
+          <ChangeOrAddSection
+            editing={editingBase}
+            changeTitle={(base) => `Change ${base.name}`}
+            addTitle="Add a base"
+            form={(base) => (
+              <BaseForm
+                key={base?.id}
+                slug={slug}
+                editing={base}
+                onDone={() => setEditingBase(undefined)}
+              />
+            )}
+          />
         ) : null}
       </Panel>
       <Panel
@@ -73,19 +74,20 @@ export function Component() {
             </>
           )}
         </QueryView>
-        {canEdit && editingPot ? (
-          <AddSection title={`Change ${editingPot.name}`}>
-            <PotForm
-              key={editingPot.id}
-              slug={slug}
-              editing={editingPot}
-              onDone={() => setEditingPot(undefined)}
-            />
-          </AddSection>
-        ) : canEdit ? (
-          <AddSection title="Add a pot">
-            <PotForm slug={slug} />
-          </AddSection>
+        {canEdit ? (
+          <ChangeOrAddSection
+            editing={editingPot}
+            changeTitle={(pot) => `Change ${pot.name}`}
+            addTitle="Add a pot"
+            form={(pot) => (
+              <PotForm
+                key={pot?.id}
+                slug={slug}
+                editing={pot}
+                onDone={() => setEditingPot(undefined)}
+              />
+            )}
+          />
         ) : null}
       </Panel>
     </div>

@@ -7,7 +7,7 @@ import { LoadingBlock } from '@vatside/ui/LoadingBlock';
 import { SafetyNote } from '@vatside/ui/SafetyNote';
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
-import { AddSection } from '../../components/AddSection.tsx';
+import { ChangeOrAddSection } from '../../components/ChangeOrAddSection.tsx';
 import { Panel } from '../../components/Panel.tsx';
 import { QueryView } from '../../components/QueryView.tsx';
 import { SystemSwitch } from '../../components/SystemSwitch.tsx';
@@ -127,21 +127,22 @@ export function Component() {
                     />
                   )}
                 </QueryView>
-                {canEdit && editingStep ? (
-                  <AddSection title={`Change step ${editingStep.number}`}>
-                    <StepForm
-                      key={editingStep.step.id}
-                      slug={slug}
-                      colorwayId={detail.id}
-                      lines={lineAmountLabels(detail)}
-                      editing={editingStep}
-                      onDone={() => setEditingStep(undefined)}
-                    />
-                  </AddSection>
-                ) : canEdit ? (
-                  <AddSection title="Add a step">
-                    <StepForm slug={slug} colorwayId={detail.id} lines={lineAmountLabels(detail)} />
-                  </AddSection>
+                {canEdit ? (
+                  <ChangeOrAddSection
+                    editing={editingStep}
+                    changeTitle={({ number }) => `Change step ${number}`}
+                    addTitle="Add a step"
+                    form={(step) => (
+                      <StepForm
+                        key={step?.step.id}
+                        slug={slug}
+                        colorwayId={detail.id}
+                        lines={lineAmountLabels(detail)}
+                        editing={step}
+                        onDone={() => setEditingStep(undefined)}
+                      />
+                    )}
+                  />
                 ) : null}
               </Panel>
             </div>

@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import type { Dye, StockSolution } from '@vatside/contracts/workbench-shelf';
 import { SafetyNote } from '@vatside/ui/SafetyNote';
 import { useState } from 'react';
-import { AddSection } from '../../components/AddSection.tsx';
+import { ChangeOrAddSection } from '../../components/ChangeOrAddSection.tsx';
 import { Pager } from '../../components/Pager.tsx';
 import { Panel } from '../../components/Panel.tsx';
 import { QueryView } from '../../components/QueryView.tsx';
@@ -38,19 +38,20 @@ export function Component() {
             </>
           )}
         </QueryView>
-        {canEdit && editingDye ? (
-          <AddSection title={`Change ${editingDye.name}`}>
-            <DyeForm
-              key={editingDye.id}
-              slug={slug}
-              editing={editingDye}
-              onDone={() => setEditingDye(undefined)}
-            />
-          </AddSection>
-        ) : canEdit ? (
-          <AddSection title="Add a dye">
-            <DyeForm slug={slug} />
-          </AddSection>
+        {canEdit ? (
+          <ChangeOrAddSection
+            editing={editingDye}
+            changeTitle={(dye) => `Change ${dye.name}`}
+            addTitle="Add a dye"
+            form={(dye) => (
+              <DyeForm
+                key={dye?.id}
+                slug={slug}
+                editing={dye}
+                onDone={() => setEditingDye(undefined)}
+              />
+            )}
+          />
         ) : null}
       </Panel>
       <Panel
@@ -74,24 +75,22 @@ export function Component() {
             </>
           )}
         </QueryView>
-        {canEdit && allDyes.data && editingStock ? (
-          <AddSection title={`Change the ${editingStock.dyeName} jar`}>
-            <StockSolutionForm
-              key={editingStock.id}
-              slug={slug}
-              dyes={allDyes.data.items}
-              editing={editingStock}
-              onDone={() => setEditingStock(undefined)}
-            />
-          </AddSection>
-        ) : canEdit && allDyes.data ? (
-          <AddSection title="Add a stock solution">
-            <StockSolutionForm
-              key={allDyes.data.items.length}
-              slug={slug}
-              dyes={allDyes.data.items}
-            />
-          </AddSection>
+        {canEdit && allDyes.data ? (
+          <ChangeOrAddSection
+            editing={editingStock}
+            changeTitle={(stock) => `Change the ${stock.dyeName} jar`}
+            addTitle="Add a stock solution"
+            form={(stock) => (
+              <StockSolutionForm
+                // A new dye on the shelf starts the add form afresh, with it on offer.
+                key={stock?.id ?? `new-${allDyes.data.items.length}`}
+                slug={slug}
+                dyes={allDyes.data.items}
+                editing={stock}
+                onDone={() => setEditingStock(undefined)}
+              />
+            )}
+          />
         ) : null}
       </Panel>
     </div>
