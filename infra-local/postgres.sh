@@ -17,9 +17,10 @@ ensure_installed() {
   PG_BIN="$bin"
 }
 
-# PostgreSQL refuses to run as root.
+# PostgreSQL refuses to run as root. Its commands start from /, a folder the postgres user
+# may enter (root's checkout is closed to it, and each command would say so).
 as_pg() {
-  if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  if [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 PGDATA="$VATSIDE_DATA_DIR/pg"

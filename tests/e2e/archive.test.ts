@@ -18,7 +18,7 @@ import { makeLiveMonth, type LiveMonth } from '../support/live-month.ts';
 // archives the month, finds the colorway by color, and prints a batch sheet to dye it again.
 // Pool Teal (from the live-month support): one 100 g skein at 1 % depth of shade from a 1 % stock,
 // so the plan is 100 mL of a 500 mL jar (stock mL = WOG × DOS ÷ strength, common practice,
-// shared/reference/README.md).
+// packages/dye-kit/test-data/README.md).
 
 let browser: Browser;
 let host: ApiPerson;

@@ -6,7 +6,7 @@ import { US_TBSP_ML } from './units.ts';
 export type AcidKind = 'vinegar' | 'citric';
 
 // Common practice for acid dyes and food color on protein fiber (from memory, see
-// shared/reference/README.md): with 5 % table vinegar, at least ¼ cup (60 mL) per pound (450 g)
+// packages/dye-kit/test-data/README.md): with 5 % table vinegar, at least ¼ cup (60 mL) per pound (450 g)
 // of dry fiber, and by bath volume 15–60 mL per liter; citric acid about 1 tbsp of crystals
 // per pound of fiber.
 const REFERENCE_VINEGAR_PCT = 5;

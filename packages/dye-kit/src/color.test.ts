@@ -18,8 +18,11 @@ import {
 import { DyeKitError } from './errors.ts';
 import { mulberry32 } from './random.ts';
 
-const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
-const tsvPath = path.resolve(repoRoot, '../shared/reference/ciede2000-sharma-2005.tsv');
+// Copied into the package (source in the file's header) so a clean clone tests on its own.
+const tsvPath = path.resolve(
+  path.dirname(fileURLToPath(import.meta.url)),
+  '../test-data/ciede2000-sharma-2005.tsv',
+);
 
 function sharmaPairs(): Array<{ lab1: Lab; lab2: Lab; expected: number }> {
   const rows = readFileSync(tsvPath, 'utf8')

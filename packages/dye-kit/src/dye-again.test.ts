@@ -5,7 +5,7 @@ import { scaleRecipe } from './scale.ts';
 import type { Recipe } from './recipe.ts';
 
 // Hand-worked figures. Formulas: dye mass = WOG × DOS ÷ 100 and stock mL = WOG × DOS ÷ stock
-// strength (common practice, shared/reference/README.md); DOS = dye mass ÷ fiber × 100 is the
+// strength (common practice, packages/dye-kit/test-data/README.md); DOS = dye mass ÷ fiber × 100 is the
 // same rule turned round.
 
 const teal: Recipe = {
@@ -20,7 +20,7 @@ const teal: Recipe = {
 
 describe('a recipe from the dye log (common practice)', () => {
   it('the reference example turned round: 200 mL of a 1 % stock on 100 g is 2 % DOS', () => {
-    // shared/reference/README.md: 100 g of yarn at 2 % DOS from a 1 % stock takes 200 mL.
+    // packages/dye-kit/test-data/README.md: 100 g of yarn at 2 % DOS from a 1 % stock takes 200 mL.
     const { recipe, lines } = recipeFromLog(
       {
         planned: { ...teal, lines: [teal.lines[0]!] },

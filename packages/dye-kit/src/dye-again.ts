@@ -35,7 +35,7 @@ export interface RebuiltRecipe {
 /**
  * The recipe a logged bath implies, written for a skein of `weightOfGoodsG`. Stock lines: dye
  * mass = strength × logged mL ÷ 100, then depth of shade = dye mass ÷ fiber dyed × 100 (common
- * practice, see shared/reference/README.md: dye mass = WOG × DOS ÷ 100). Food color has no known
+ * practice, see packages/dye-kit/test-data/README.md: dye mass = WOG × DOS ÷ 100). Food color has no known
  * strength, so it is restated per 100 g of the fiber dyed. The liquor ratio is the bath volume
  * over the fiber dyed when the bath was measured; a planned acid amount scales with the skein.
  */

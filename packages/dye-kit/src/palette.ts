@@ -219,7 +219,7 @@ const BAND_MESSAGES: Record<ClosenessBand, string> = {
   ownStory: 'A color story of its own, sparked by the inspiration.',
 };
 
-/** Bands of ΔE2000: under 5, 5–10, 10–20, over 20 (shared/reference/README.md). */
+/** Bands of ΔE2000: under 5, 5–10, 10–20, over 20 (packages/dye-kit/test-data/README.md). */
 export function closenessBand(deltaE: number): ClosenessBand {
   requireNonNegative('deltaE2000', deltaE);
   if (deltaE < 5) return 'veryClose';

@@ -21,7 +21,7 @@ import { startTestServer } from '../test-support/test-server.ts';
 
 // The fixture's live pot: two 100 g skeins at 1 % depth of shade from a 1 % stock (plan 200 mL of
 // a 500 mL jar). The host logs 210 mL. Formulas: dye mass = WOG × DOS ÷ 100, stock mL = WOG × DOS
-// ÷ strength (common practice, shared/reference/README.md).
+// ÷ strength (common practice, packages/dye-kit/test-data/README.md).
 const loggedMl = 210;
 /** The finished skeins of a colorway planned without target swatches, photographed flat. */
 const seaGlassHex = '#7fb8a4';

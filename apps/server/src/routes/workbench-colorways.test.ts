@@ -123,7 +123,7 @@ describe('colorways: recipes, dye-kit amounts and run sheets', () => {
     // Bath at a 30:1 liquor ratio: 115 g × 30 = 3450 mL (water at 1 g/mL, common practice).
     expect(amounts.bathVolumeMl).toBeCloseTo(3450, 9);
     // 5 % vinegar, middle of 15–60 mL per liter of bath: 37.5 mL/L × 3.45 L = 129.375 mL
-    // (common practice, from memory: see shared/reference/README.md).
+    // (common practice, from memory: see packages/dye-kit/test-data/README.md).
     expect(acid.recommendedMl).toBeCloseTo(129.375, 9);
     expect(amounts.acid.amountMl).toBeCloseTo(129.375, 9);
     expect(acid.rule).toMatch(/common practice/);

@@ -18,7 +18,17 @@ export interface ObjectStore {
   close(): void;
 }
 
+/**
+ * The SDK prints, once per process, that its releases after early 2027 will need Node.js 22.
+ * Vatside runs on Node.js 20 on purpose (README, "Runtime"), so that one notice is silenced
+ * before the first client is made; every other warning still prints.
+ */
+export function silenceSdkNodeVersionNotice(): void {
+  process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
+}
+
 export function createObjectStore(config: Config): ObjectStore {
+  silenceSdkNodeVersionNotice();
   const client = new S3Client({
     endpoint: config.S3_ENDPOINT,
     region: config.S3_REGION,

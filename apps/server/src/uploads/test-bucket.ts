@@ -1,8 +1,10 @@
 import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import type { Config } from '../config.ts';
+import { silenceSdkNodeVersionNotice } from '../storage/object-store.ts';
 
 /** Counts the objects under a prefix with ListObjectsV2, straight from the store (tests only). */
 export async function countObjects(config: Config, prefix: string): Promise<number> {
+  silenceSdkNodeVersionNotice();
   const client = new S3Client({
     endpoint: config.S3_ENDPOINT,
     region: config.S3_REGION,
